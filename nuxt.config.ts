@@ -1,0 +1,33 @@
+export default defineNuxtConfig({
+  compatibilityDate: '2025-07-15',
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils'],
+  css: [
+    '@fontsource/inter/400.css',
+    '@fontsource/inter/500.css',
+    '@fontsource/inter/600.css',
+    '@fontsource/inter/700.css',
+    'leaflet/dist/leaflet.css',
+  ],
+  tailwindcss: { cssPath: '~/assets/css/tailwind.css', viewer: false },
+  devtools: { enabled: false },
+  telemetry: false,
+  app: {
+    head: {
+      title: 'Passagewright',
+      htmlAttrs: { lang: 'en' },
+      meta: [{ name: 'viewport', content: 'width=device-width, initial-scale=1' }],
+      link: [{ rel: 'icon', type: 'image/svg+xml', href: '/favicon.svg' }],
+    },
+  },
+  runtimeConfig: {
+    databaseUrl: '',
+    smtpUrl: 'smtp://127.0.0.1:2525',
+    mailFrom: 'Passagewright <passages@kestrel-bight.example>',
+    tileCacheDir: '',
+    outboxWorker: 'on',
+  },
+  nitro: {
+    externals: { inline: [] },
+  },
+  typescript: { strict: true },
+})
