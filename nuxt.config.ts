@@ -27,7 +27,9 @@ export default defineNuxtConfig({
     outboxWorker: 'on',
   },
   nitro: {
-    externals: { inline: [] },
+    output: process.env.PW_OUTPUT_DIR ? { dir: process.env.PW_OUTPUT_DIR } : undefined,
   },
   typescript: { strict: true },
+  // Separate build folders let several builds run side by side (tests, benchmarks).
+  buildDir: process.env.PW_BUILD_DIR || undefined,
 })
