@@ -1,3 +1,5 @@
+import { fileURLToPath } from 'node:url'
+
 export default defineNuxtConfig({
   compatibilityDate: '2025-07-15',
   modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils'],
@@ -25,6 +27,13 @@ export default defineNuxtConfig({
     mailFrom: 'Passagewright <passages@kestrel-bight.example>',
     tileCacheDir: '',
     outboxWorker: 'on',
+  },
+  hooks: {
+    // Our API error handler runs first; pages still get Nuxt's error page.
+    'nitro:config'(config) {
+      const nuxtHandlers = [config.errorHandler].flat().filter((h): h is string => typeof h === 'string')
+      config.errorHandler = [fileURLToPath(new URL('./server/error.ts', import.meta.url)), ...nuxtHandlers] as unknown as string
+    },
   },
   nitro: {
     output: process.env.PW_OUTPUT_DIR ? { dir: process.env.PW_OUTPUT_DIR } : undefined,

@@ -1,0 +1,32 @@
+#!/usr/bin/env bash
+# npm test: the same bootstrap on a fresh test database, then the type check and every Vitest project.
+source "$(dirname "$0")/lib.sh"
+cd "$ROOT"
+ensure_node_modules
+[ -x /usr/bin/chromium ] || apt_install chromium
+command -v GeodSolve >/dev/null && command -v RhumbSolve >/dev/null || apt_install geographiclib-tools
+start_postgres
+TEST_DB="${PW_TEST_DB:-passagewright_test}"
+ensure_database "$TEST_DB" fresh
+export PW_TEST_DB="$TEST_DB"
+export NUXT_SESSION_PASSWORD="${NUXT_SESSION_PASSWORD:-passagewright-test-session-password-0123456789}"
+export NUXT_SMTP_URL="smtp://127.0.0.1:2526"
+export PW_MAIL_DIR="$DATA/mail-test"
+export NUXT_TILE_CACHE_DIR="$DATA/tiles-test"
+rm -rf "$PW_MAIL_DIR"
+MAIL_PID=""
+start_mail_fake 2526 "$PW_MAIL_DIR"
+cleanup() {
+  [ -n "$MAIL_PID" ] && kill "$MAIL_PID" 2>/dev/null || true
+  [ "${PG_STARTED_HERE:-0}" = 1 ] && stop_postgres
+}
+trap cleanup EXIT INT TERM
+
+run_db migrate
+run_db seed
+log "building the app for the tests"
+npx nuxt build >"$DATA/build-test.log" 2>&1 || { tail -60 "$DATA/build-test.log"; die "build failed"; }
+log "type check (vue-tsc --build --noEmit)"
+npx vue-tsc --build --noEmit
+log "tests: unit, nuxt, e2e"
+npx vitest run "$@"

@@ -1,0 +1,33 @@
+import type { NitroErrorHandler } from 'nitropack'
+
+interface Issue { path?: PropertyKey[], message: string }
+
+function issueText(issues: Issue[]) {
+  return issues.slice(0, 5).map(i => (i.path?.length ? `${i.path.join('.')}: ${i.message}` : i.message)).join('; ')
+}
+
+/**
+ * API errors as JSON with a message a person can act on: validation issues name their field,
+ * an unreachable database answers 503. Pages fall through to Nuxt's own error page.
+ */
+const apiErrorHandler: NitroErrorHandler = (error, event) => {
+  if (!event.path.startsWith('/api/')) return
+  const anyError = error as any
+  let statusCode: number = anyError.statusCode || 500
+  let message: string = anyError.statusMessage || 'Server error'
+  const issues: Issue[] | undefined = anyError.data?.issues ?? anyError.cause?.issues
+  if (statusCode === 400 && Array.isArray(issues)) message = issueText(issues)
+  else if (isDatabaseUnavailable(error)) { statusCode = 503; message = 'The database is not reachable at the moment; try again shortly' }
+  else if (statusCode >= 500) {
+    console.error(`[api error] ${event.method} ${event.path}`, error)
+    message = 'Server error'
+  }
+  else if (anyError.message && anyError.message !== message && statusCode < 500 && !anyError.unhandled) message = anyError.statusMessage ? `${anyError.statusMessage}` : anyError.message
+  setResponseStatus(event, statusCode)
+  setResponseHeader(event, 'content-type', 'application/json')
+  if (statusCode === 503) setResponseHeader(event, 'retry-after', '5')
+  const data = statusCode < 500 ? (Array.isArray(issues) ? { issues: issues.map(i => ({ path: i.path, message: i.message })) } : anyError.data) : undefined
+  return send(event, JSON.stringify({ statusCode, statusMessage: message, message, data }))
+}
+
+export default apiErrorHandler
