@@ -1,0 +1,41 @@
+import { z } from 'zod'
+import { latLonSchema, legMethodSchema } from './geo'
+import type { LatLon } from './geo'
+
+export const LAND_CHECK_CAUTION = 'Coastline data is coarse (Natural Earth 1:50m): a clear land check does not mean a safe track; it misses islands, reefs and harbours.'
+
+/** Longest track (sum of legs) one land check accepts, in nm: several times round the world. */
+export const LAND_CHECK_MAX_TRACK_NM = 100_000
+export const LAND_CHECK_MAX_WAYPOINTS = 5000
+
+// Spherical great-circle distance, good enough for a size limit.
+function roughNm(a: LatLon, b: LatLon): number {
+  const r = Math.PI / 180
+  const h = Math.sin(((b.lat - a.lat) * r) / 2) ** 2 + Math.cos(a.lat * r) * Math.cos(b.lat * r) * Math.sin(((b.lon - a.lon) * r) / 2) ** 2
+  return (2 * Math.asin(Math.min(1, Math.sqrt(h))) * 180 * 60) / Math.PI
+}
+
+/** A waypoint of the checked track; `method` is that of the leg arriving at it (ignored on the first). */
+export const landCheckWaypointSchema = latLonSchema.extend({ method: legMethodSchema })
+
+export const landCheckSchema = z.object({
+  waypoints: z.array(landCheckWaypointSchema)
+    .min(2, 'a land check needs at least 2 waypoints')
+    .max(LAND_CHECK_MAX_WAYPOINTS, `at most ${LAND_CHECK_MAX_WAYPOINTS} waypoints`)
+    .refine(
+      wps => wps.reduce((sum, wp, i) => sum + (i > 0 ? roughNm(wps[i - 1]!, wp) : 0), 0) <= LAND_CHECK_MAX_TRACK_NM,
+      `the track is longer than ${LAND_CHECK_MAX_TRACK_NM} nm`,
+    ),
+  clearanceNm: z.number({ error: 'must be a number' }).finite().min(0, 'must be 0 or more').max(200, 'at most 200 nm'),
+})
+export type LandCheckInput = z.infer<typeof landCheckSchema>
+
+export interface LandCheckLeg {
+  index: number
+  crossesLand: boolean
+  firstLandPoint: LatLon | null
+  closestApproachNm: number
+  closestCoastPoint: LatLon
+  withinClearance: boolean
+}
+export interface LandCheckResult { legs: LandCheckLeg[], caution: string }
