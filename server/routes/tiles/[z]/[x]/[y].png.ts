@@ -1,0 +1,20 @@
+import { join } from 'node:path'
+
+// Public chart tiles: no session, immutable (the style version is part of the disk cache path).
+export default defineEventHandler(async (event) => {
+  const params = getRouterParams(event)
+  const tile = parseTileAddress(params.z, params.x, params.y ?? params['y.png'])
+  if (!tile) throw createError({ statusCode: 400, statusMessage: 'Not a tile: zoom 0–8, x and y within the zoom' })
+  const cacheDir = useRuntimeConfig(event).tileCacheDir || join(process.cwd(), '.data/tiles')
+  const { png, etag } = await getTile(tile, cacheDir)
+  setResponseHeaders(event, {
+    'Content-Type': 'image/png',
+    'Cache-Control': 'public, max-age=31536000, immutable',
+    'ETag': etag,
+  })
+  if (getRequestHeader(event, 'if-none-match') === etag) {
+    setResponseStatus(event, 304)
+    return null
+  }
+  return png
+})
