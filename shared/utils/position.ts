@@ -165,3 +165,10 @@ export function normaliseLongitude(lon: number): number {
   const y = lon % 360
   return y > 180 ? y - 360 : y < -180 ? y + 360 : y
 }
+
+/** Course in 0 ≤ c < 360. */
+export function normaliseCourse(deg: number): number {
+  let c = deg % 360
+  if (c < 0) c += 360
+  return c >= 360 || c === 0 ? 0 : c
+}
