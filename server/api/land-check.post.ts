@@ -1,4 +1,4 @@
-import { landCheckSchema, LAND_CHECK_CAUTION } from '#shared/types/landCheck'
+import { landCheckSchema, LAND_CHECK_RESULT_CAUTION } from '#shared/types/landCheck'
 import type { LandCheckResult } from '#shared/types/landCheck'
 
 export default defineEventHandler(async (event) => {
@@ -13,5 +13,5 @@ export default defineEventHandler(async (event) => {
     closestCoastPoint: leg.closestCoastPoint,
     withinClearance: leg.withinClearance,
   }))
-  return { legs: checked, caution: LAND_CHECK_CAUTION } satisfies LandCheckResult
+  return { legs: checked, caution: LAND_CHECK_RESULT_CAUTION } satisfies LandCheckResult
 })

@@ -27,10 +27,10 @@ const MAX_MERCATOR_LAT = 85.0511287798066
 export interface TileAddress { z: number, x: number, y: number }
 export interface Tile { png: Buffer, etag: string }
 
-/** Parses route parameters ("3", "4", "5" or "5.png"); undefined when not a tile of zoom 0–8. */
-export function parseTileAddress(z: unknown, x: unknown, y: unknown): TileAddress | undefined {
-  const nums = [z, x, String(y ?? '').replace(/\.png$/, '')].map(v => (typeof v === 'string' && /^\d{1,3}$/.test(v) ? Number(v) : Number.NaN))
-  const [tz, tx, ty] = nums as [number, number, number]
+/** Parses route parameters ("3", "4", "5.png"); undefined unless a tile of zoom 0–8 addressed as in /tiles/z/x/y.png. */
+export function parseTileAddress(z: unknown, x: unknown, yPng: unknown): TileAddress | undefined {
+  const y = typeof yPng === 'string' && yPng.endsWith('.png') ? yPng.slice(0, -4) : undefined
+  const [tz, tx, ty] = [z, x, y].map(v => (typeof v === 'string' && /^(0|[1-9]\d{0,2})$/.test(v) ? Number(v) : Number.NaN)) as [number, number, number]
   if (!(tz >= 0 && tz <= MAX_TILE_ZOOM)) return undefined
   const n = 2 ** tz
   if (!(tx >= 0 && tx < n && ty >= 0 && ty < n)) return undefined

@@ -2,7 +2,8 @@ import { z } from 'zod'
 import { latLonSchema, legMethodSchema } from './geo'
 import type { LatLon } from './geo'
 
-export const LAND_CHECK_CAUTION = 'Coastline data is coarse (Natural Earth 1:50m): a clear land check does not mean a safe track; it misses islands, reefs and harbours.'
+/** Shown with every land check result (the general caution is LAND_CHECK_CAUTION in shared/utils/cautions.ts). */
+export const LAND_CHECK_RESULT_CAUTION = 'Coastline data is coarse (Natural Earth 1:50m): a clear land check does not mean a safe track; it misses islands, reefs and harbours.'
 
 /** Longest track (sum of legs) one land check accepts, in nm: several times round the world. */
 export const LAND_CHECK_MAX_TRACK_NM = 100_000

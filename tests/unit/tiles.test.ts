@@ -66,8 +66,9 @@ describe('chart tiles', () => {
 
   it('accept only zoom 0–8 and x, y inside the zoom', () => {
     expect(parseTileAddress('3', '7', '5.png')).toEqual({ z: 3, x: 7, y: 5 })
-    expect(parseTileAddress('8', '255', '255')).toEqual({ z: 8, x: 255, y: 255 })
-    for (const bad of [['9', '0', '0'], ['3', '8', '0'], ['3', '0', '8'], ['-1', '0', '0'], ['a', '0', '0'], ['2', '1.5', '0'], ['2', '1', 'x.png'], ['', '0', '0'], ['2', '1', undefined]])
+    expect(parseTileAddress('8', '255', '255.png')).toEqual({ z: 8, x: 255, y: 255 })
+    expect(parseTileAddress('0', '0', '0.png')).toEqual({ z: 0, x: 0, y: 0 })
+    for (const bad of [['9', '0', '0'], ['3', '8', '0'], ['3', '0', '8'], ['-1', '0', '0'], ['a', '0', '0'], ['2', '1.5', '0'], ['2', '1', 'x.png'], ['', '0', '0.png'], ['2', '1', undefined], ['2', '1', '1'], ['2', '1', '1.5.png'], ['2', '1', '1.png.png'], ['2', '01', '1.png']])
       expect(parseTileAddress(bad[0], bad[1], bad[2]), bad.join('/')).toBeUndefined()
   })
 

@@ -3,7 +3,8 @@ import { join } from 'node:path'
 // Public chart tiles: no session, immutable (the style version is part of the disk cache path).
 export default defineEventHandler(async (event) => {
   const params = getRouterParams(event)
-  const tile = parseTileAddress(params.z, params.x, params.y ?? params['y.png'])
+  // The router names the last segment after the file, "y.png", and keeps the suffix in its value.
+  const tile = parseTileAddress(params.z, params.x, params['y.png'])
   if (!tile) throw createError({ statusCode: 400, statusMessage: 'Not a tile: zoom 0–8, x and y within the zoom' })
   const cacheDir = useRuntimeConfig(event).tileCacheDir || join(process.cwd(), '.data/tiles')
   const { png, etag } = await getTile(tile, cacheDir)
