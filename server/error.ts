@@ -1,5 +1,8 @@
 import type { NitroErrorHandler } from 'nitropack'
 
+// h3's default reason phrases; when one of these is all we have, the error's own message says more.
+const GENERIC_REASONS = new Set(['Bad Request', 'Validation Error', 'Unsupported Media Type', 'Payload Too Large', 'Not Found', 'Method Not Allowed'])
+
 interface Issue { path?: PropertyKey[], message: string }
 
 function issueText(issues: Issue[]) {
@@ -22,7 +25,7 @@ const apiErrorHandler: NitroErrorHandler = (error, event) => {
     console.error(`[api error] ${event.method} ${event.path}`, error)
     message = 'Server error'
   }
-  else if (anyError.message && anyError.message !== message && statusCode < 500 && !anyError.unhandled) message = anyError.statusMessage ? `${anyError.statusMessage}` : anyError.message
+  else if (GENERIC_REASONS.has(message) && anyError.message && !anyError.unhandled) message = anyError.message
   setResponseStatus(event, statusCode)
   setResponseHeader(event, 'content-type', 'application/json')
   if (statusCode === 503) setResponseHeader(event, 'retry-after', '5')

@@ -1,9 +1,10 @@
-// Every API route needs a session except signing in and the health check.
+// Every API route needs a session except signing in, the health check and nuxt-auth-utils'
+// own session endpoint (it only ever reveals the caller's own session).
 const OPEN = new Set(['POST /api/auth/login', 'GET /api/health'])
 
 export default defineEventHandler(async (event) => {
   if (!event.path.startsWith('/api/')) return
-  const path = event.path.split('?')[0]
-  if (OPEN.has(`${event.method} ${path}`)) return
+  const path = event.path.split('?')[0]!
+  if (OPEN.has(`${event.method} ${path}`) || path === '/api/_auth/session') return
   await requireUserSession(event)
 })
