@@ -28,7 +28,7 @@ const apiErrorHandler: NitroErrorHandler = (error, event) => {
   else if (GENERIC_REASONS.has(message) && anyError.message && !anyError.unhandled) message = anyError.message
   setResponseStatus(event, statusCode)
   setResponseHeader(event, 'content-type', 'application/json')
-  if (statusCode === 503) setResponseHeader(event, 'retry-after', '5')
+  if (statusCode === 503) setResponseHeader(event, 'retry-after', 5)
   const data = statusCode < 500 ? (Array.isArray(issues) ? { issues: issues.map(i => ({ path: i.path, message: i.message })) } : anyError.data) : undefined
   return send(event, JSON.stringify({ statusCode, statusMessage: message, message, data }))
 }

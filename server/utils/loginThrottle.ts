@@ -24,7 +24,7 @@ export async function assertLoginAllowed(event: H3Event, email: string) {
   const now = Date.now()
   const worst = Math.max(...keys(event, email).map(k => recent(k, now).length))
   if (worst >= REFUSE_AFTER) {
-    setResponseHeader(event, 'retry-after', String(WINDOW_MS / 1000))
+    setResponseHeader(event, 'retry-after', WINDOW_MS / 1000)
     throw createError({ statusCode: 429, statusMessage: 'Too many failed sign-ins; wait 15 minutes and try again' })
   }
   if (worst >= SLOW_AFTER) await new Promise(r => setTimeout(r, Math.min(4000, 250 * 2 ** (worst - SLOW_AFTER))))
