@@ -130,6 +130,7 @@ function splitPosition(s: string): [string, string] {
 export function parsePosition(text: string): LatLon {
   const s = normaliseText(text)
   if (!s) throw new PositionError('Position is empty')
+  if (!/\d/.test(s)) throw new PositionError('Position has no numbers')
   let [first, second] = splitPosition(s).map(p => p.trim()) as [string, string]
   if (/[EW]/.test(first.replace(/D/g, '')) && /[NS]/.test(second)) [first, second] = [second, first]
   return { lat: parseLatitude(first), lon: parseLongitude(second) }

@@ -6,7 +6,8 @@ export default defineEventHandler(async (event) => {
   // The router names the last segment after the file, "y.png", and keeps the suffix in its value.
   const tile = parseTileAddress(params.z, params.x, params['y.png'])
   if (!tile) throw createError({ statusCode: 400, statusMessage: 'Not a tile: zoom 0–8, x and y within the zoom' })
-  const cacheDir = useRuntimeConfig(event).tileCacheDir || join(process.cwd(), '.data/tiles')
+  // Without the event: the per-request copy of the runtime config costs more than serving a cached tile.
+  const cacheDir = useRuntimeConfig().tileCacheDir || join(process.cwd(), '.data/tiles')
   const { png, etag } = await getTile(tile, cacheDir)
   setResponseHeaders(event, {
     'Content-Type': 'image/png',
