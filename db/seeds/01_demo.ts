@@ -3,6 +3,7 @@
 import type { Knex } from 'knex'
 import { Hash } from '@adonisjs/hash'
 import { Scrypt } from '@adonisjs/hash/drivers/scrypt'
+import { computeLegTable } from '../../shared/utils/legTable'
 import { demoPlaces, demoPlans } from './demoData'
 
 const DEMO_PASSWORD = 'passage-demo'
@@ -57,6 +58,7 @@ export async function seed(knex: Knex) {
 
   for (const plan of demoPlans) {
     const company = plan.company === 'larkspur' ? lr : kb
+    const { totals } = computeLegTable(plan.waypoints.map(([name, lat, lon, method]) => ({ name, lat, lon, method })), plan.departureUtc, plan.speedKn)
     const [row] = await knex('plans').insert({
       company_id: company, vessel_id: vesselId(plan.vessel), title: plan.title, departure_utc: plan.departureUtc,
       speed_kn: plan.speedKn, limit_lat: plan.limitLat ?? null, status: plan.status,
@@ -65,6 +67,7 @@ export async function seed(knex: Knex) {
       created_by: userId(plan.createdBy),
       approved_by: plan.status === 'approved' ? userId('master@kestrel-bight.example') : null,
       approved_at: plan.status === 'approved' ? '2026-11-20T08:30:00Z' : null,
+      total_nm: totals.distanceNm, arrival_utc: totals.etaUtc,
     }).returning('id')
     await knex('waypoints').insert(plan.waypoints.map(([name, lat, lon, method], seq) => ({ plan_id: row.id, seq, name, lat, lon, method })))
     for (const e of plan.events ?? [])

@@ -1,27 +1,139 @@
+import type { Knex } from 'knex'
 import type { SessionUser } from '#shared/types/auth'
-import type { PlanSummary } from '#shared/types/plan'
+import type { PlanCreateInput, PlanDetail, PlanEvent, PlanHeaderInput, PlanSummary } from '#shared/types/plan'
+import type { Waypoint } from '#shared/types/waypoint'
+import { computeLegTable } from '#shared/utils/legTable'
 
 const summaryColumns = [
   'plans.id', 'plans.title', 'plans.vessel_id as vesselId', 'vessels.name as vesselName', 'plans.status', 'plans.revision',
   'plans.version', 'plans.departure_utc as departureUtc', 'plans.speed_kn as speedKn', 'plans.limit_lat as limitLat',
   'plans.total_nm as totalNm', 'plans.arrival_utc as arrivalUtc', 'plans.updated_at as updatedAt',
 ]
+const detailColumns = [
+  ...summaryColumns, 'plans.company_id as companyId', 'plans.departure_place_id as departurePlaceId', 'plans.arrival_place_id as arrivalPlaceId',
+  'dep.time_zone as departureTimeZone', 'arr.time_zone as arrivalTimeZone', 'plans.revision_of_plan_id as revisionOfPlanId',
+  'approver.name as approvedByName', 'plans.approved_at as approvedAt', 'creator.name as createdByName', 'vessels.master_user_id as masterUserId',
+]
+
+const iso = (v: unknown) => (v ? new Date(v as string).toISOString() : null)
 
 function toSummary(row: any): PlanSummary {
-  return {
-    ...row,
-    speedKn: Number(row.speedKn),
-    departureUtc: new Date(row.departureUtc).toISOString(),
-    arrivalUtc: row.arrivalUtc ? new Date(row.arrivalUtc).toISOString() : null,
-    updatedAt: new Date(row.updatedAt).toISOString(),
-  }
+  return { ...row, speedKn: Number(row.speedKn), departureUtc: iso(row.departureUtc)!, arrivalUtc: iso(row.arrivalUtc), updatedAt: iso(row.updatedAt)! }
+}
+
+function toWaypoint(row: any): Waypoint {
+  const num = (v: unknown) => (v == null ? null : Number(v))
+  return { name: row.name, lat: row.lat, lon: row.lon, method: row.method, speedKn: num(row.speed_kn), xteNm: num(row.xte_nm), turnRadiusNm: num(row.turn_radius_nm), notes: row.notes }
+}
+
+function waypointRows(planId: number, waypoints: Waypoint[]) {
+  return waypoints.map((w, seq) => ({
+    plan_id: planId, seq, name: w.name ?? '', lat: w.lat, lon: normaliseLongitude(w.lon), method: w.method ?? 'rhumb',
+    speed_kn: w.speedKn ?? null, xte_nm: w.xteNm ?? null, turn_radius_nm: w.turnRadiusNm ?? null, notes: w.notes ?? null,
+  }))
 }
 
 export async function listPlans(user: SessionUser): Promise<PlanSummary[]> {
-  const rows = await useDb()('plans')
-    .join('vessels', 'vessels.id', 'plans.vessel_id')
-    .where('plans.company_id', user.companyId)
-    .orderBy('plans.departure_utc', 'desc')
-    .select(summaryColumns)
+  const rows = await useDb()('plans').join('vessels', 'vessels.id', 'plans.vessel_id')
+    .where('plans.company_id', user.companyId).orderBy('plans.departure_utc', 'desc').select(summaryColumns)
   return rows.map(toSummary)
+}
+
+/** The plan row in the user's company, or 404 (another company's plan does not exist for them). */
+export async function findPlan(user: SessionUser, id: number, db: Knex | Knex.Transaction = useDb()): Promise<PlanDetail> {
+  const row = await db('plans').join('vessels', 'vessels.id', 'plans.vessel_id')
+    .leftJoin('places as dep', 'dep.id', 'plans.departure_place_id').leftJoin('places as arr', 'arr.id', 'plans.arrival_place_id')
+    .leftJoin('users as approver', 'approver.id', 'plans.approved_by').leftJoin('users as creator', 'creator.id', 'plans.created_by')
+    .where({ 'plans.id': id, 'plans.company_id': user.companyId }).first(detailColumns)
+  if (!row) notFound('Plan')
+  return { ...toSummary(row), approvedAt: iso(row.approvedAt) } as PlanDetail
+}
+
+export async function loadWaypoints(planId: number, db: Knex | Knex.Transaction = useDb()): Promise<Waypoint[]> {
+  return (await db('waypoints').where({ plan_id: planId }).orderBy('seq')).map(toWaypoint)
+}
+
+export async function listEvents(planId: number): Promise<PlanEvent[]> {
+  const rows = await useDb()('plan_events').where({ plan_id: planId }).orderBy([{ column: 'created_at' }, { column: 'id' }])
+  return rows.map(r => ({ id: r.id, userName: r.user_name, role: r.role, kind: r.kind, fromStatus: r.from_status, toStatus: r.to_status, remarks: r.remarks, createdAt: iso(r.created_at)! }))
+}
+
+export function legTableFor(plan: Pick<PlanDetail, 'departureUtc' | 'speedKn'>, waypoints: Waypoint[], helmDelayS = 0) {
+  return computeLegTable(waypoints, plan.departureUtc, plan.speedKn, { helmDelayS })
+}
+
+export async function getPlanView(user: SessionUser, id: number) {
+  const plan = await findPlan(user, id)
+  const waypoints = await loadWaypoints(id)
+  const { legs, totals } = legTableFor(plan, waypoints)
+  return { plan, waypoints, legs, totals, events: await listEvents(id) }
+}
+
+export async function recordEvent(db: Knex | Knex.Transaction, planId: number, user: SessionUser, kind: string, from: string | null, to: string | null, remarks: string | null = null) {
+  await db('plan_events').insert({ plan_id: planId, user_id: user.id, user_name: user.name, role: user.role, kind, from_status: from, to_status: to, remarks })
+}
+
+export async function assertVesselInCompany(user: SessionUser, vesselId: number, db: Knex | Knex.Transaction = useDb()) {
+  const vessel = await db('vessels').where({ id: vesselId, company_id: user.companyId }).first('id')
+  if (!vessel) throw createError({ statusCode: 400, statusMessage: 'vesselId: no such vessel in your company' })
+}
+
+export async function createPlan(user: SessionUser, input: PlanCreateInput, waypoints: Waypoint[] = []) {
+  return useDb().transaction(async (trx) => {
+    await assertVesselInCompany(user, input.vesselId, trx)
+    const [row] = await trx('plans').insert({
+      company_id: user.companyId, vessel_id: input.vesselId, title: input.title, departure_utc: input.departureUtc, speed_kn: input.speedKn,
+      limit_lat: input.limitLat ?? null, departure_place_id: input.departurePlaceId ?? null, arrival_place_id: input.arrivalPlaceId ?? null, created_by: user.id,
+    }).returning('id')
+    if (waypoints.length) await writeWaypoints(trx, row.id, { departureUtc: input.departureUtc, speedKn: input.speedKn }, waypoints)
+    await recordEvent(trx, row.id, user, 'created', null, 'draft')
+    return { id: row.id as number }
+  })
+}
+
+async function writeWaypoints(trx: Knex.Transaction, planId: number, plan: { departureUtc: string, speedKn: number }, waypoints: Waypoint[]) {
+  await trx('waypoints').where({ plan_id: planId }).delete()
+  const rows = waypointRows(planId, waypoints)
+  for (let i = 0; i < rows.length; i += 1000) await trx('waypoints').insert(rows.slice(i, i + 1000))
+  await storeTotals(trx, planId, plan, waypoints)
+}
+
+/** Totals kept on the plan row so the board lists them without recomputing every plan. */
+async function storeTotals(trx: Knex.Transaction, planId: number, plan: { departureUtc: string, speedKn: number }, waypoints: Waypoint[]) {
+  const { totals } = legTableFor(plan, waypoints)
+  await trx('plans').where({ id: planId }).update({ total_nm: waypoints.length > 1 ? totals.distanceNm : null, arrival_utc: waypoints.length > 1 ? totals.etaUtc : null })
+}
+
+function assertEditable(plan: PlanDetail) {
+  if (plan.status !== 'draft' && plan.status !== 'returned')
+    throw createError({ statusCode: 409, statusMessage: `This plan is ${plan.status}; only a draft can be edited${plan.status === 'approved' ? ' (start a revision to change it)' : ''}` })
+}
+
+/** Bumps the version only if the caller saw the current one: the optimistic lock every write goes through. */
+async function bumpVersion(trx: Knex.Transaction, plan: PlanDetail, expected: number, extra: Record<string, unknown> = {}) {
+  const updated = await trx('plans').where({ id: plan.id, version: expected }).update({ version: expected + 1, updated_at: trx.fn.now(), ...extra })
+  if (updated === 0) throw createError({ statusCode: 409, statusMessage: 'The plan was changed by someone else since you loaded it', data: { currentVersion: plan.version } })
+}
+
+export async function saveWaypoints(user: SessionUser, id: number, version: number, waypoints: Waypoint[]) {
+  await useDb().transaction(async (trx) => {
+    const plan = await findPlan(user, id, trx)
+    assertEditable(plan)
+    await bumpVersion(trx, plan, version, plan.status === 'returned' ? { status: 'draft' } : {})
+    await writeWaypoints(trx, id, plan, waypoints)
+  })
+  return getPlanView(user, id)
+}
+
+export async function updatePlanHeader(user: SessionUser, id: number, input: PlanHeaderInput) {
+  await useDb().transaction(async (trx) => {
+    const plan = await findPlan(user, id, trx)
+    assertEditable(plan)
+    await bumpVersion(trx, plan, input.version, {
+      title: input.title, departure_utc: input.departureUtc, speed_kn: input.speedKn, limit_lat: input.limitLat ?? null,
+      departure_place_id: input.departurePlaceId ?? null, arrival_place_id: input.arrivalPlaceId ?? null,
+    })
+    await storeTotals(trx, id, { departureUtc: input.departureUtc, speedKn: input.speedKn }, await loadWaypoints(id, trx))
+  })
+  return getPlanView(user, id)
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { latitudeSchema } from './geo'
+import { waypointListSchema } from './waypoint'
 
 export const planStatuses = ['draft', 'submitted', 'approved', 'returned'] as const
 export type PlanStatus = typeof planStatuses[number]
@@ -32,3 +33,38 @@ export const planCreateSchema = z.object({
   arrivalPlaceId: z.number().int().positive().nullable().optional(),
 })
 export type PlanCreateInput = z.infer<typeof planCreateSchema>
+
+export const waypointsPutSchema = z.object({
+  version: z.number({ error: 'version must be a number' }).int('version must be a whole number').positive('version must be positive'),
+  waypoints: waypointListSchema,
+})
+export type WaypointsPutInput = z.input<typeof waypointsPutSchema>
+
+export const planHeaderSchema = planCreateSchema.omit({ vesselId: true }).extend({
+  version: z.number({ error: 'version must be a number' }).int().positive(),
+})
+export type PlanHeaderInput = z.infer<typeof planHeaderSchema>
+
+export interface PlanEvent {
+  id: number
+  userName: string
+  role: string
+  kind: string
+  fromStatus: string | null
+  toStatus: string | null
+  remarks: string | null
+  createdAt: string
+}
+
+export interface PlanDetail extends PlanSummary {
+  companyId: number
+  departurePlaceId: number | null
+  arrivalPlaceId: number | null
+  departureTimeZone: string | null
+  arrivalTimeZone: string | null
+  revisionOfPlanId: number | null
+  approvedByName: string | null
+  approvedAt: string | null
+  createdByName: string | null
+  masterUserId: number | null
+}

@@ -1,0 +1,101 @@
+import type { PlanDetail } from '#shared/types/plan'
+import type { Waypoint } from '#shared/types/waypoint'
+import { computeLegTable } from '#shared/utils/legTable'
+
+export interface PlanHeaderDraft {
+  vesselId: number | null
+  title: string
+  departureUtc: string
+  speedKn: number
+  limitLat: number | null
+  departurePlaceId: number | null
+  arrivalPlaceId: number | null
+}
+
+export interface PlanView {
+  plan: PlanDetail
+  waypoints: Waypoint[]
+}
+
+/** What the planner is editing: the header and waypoints of one plan, with undo until saved. */
+export const usePlanDraftStore = defineStore('planDraft', () => {
+  const planId = ref<number | null>(null)
+  const version = ref(0)
+  const status = ref<PlanDetail['status']>('draft')
+  const header = ref<PlanHeaderDraft>({ vesselId: null, title: '', departureUtc: new Date().toISOString(), speedKn: 14, limitLat: null, departurePlaceId: null, arrivalPlaceId: null })
+  const waypoints = ref<Waypoint[]>([])
+  const saved = ref<string>('')
+  const undoStack = ref<{ label: string, waypoints: Waypoint[] }[]>([])
+  const selected = ref<number | null>(null)
+
+  const snapshot = () => JSON.stringify({ header: header.value, waypoints: waypoints.value })
+  const dirty = computed(() => snapshot() !== saved.value)
+  const editable = computed(() => status.value === 'draft' || status.value === 'returned')
+
+  const legTable = computed(() => {
+    const valid = waypoints.value.filter(w => Number.isFinite(w.lat) && Number.isFinite(w.lon))
+    if (valid.length < 2 || !(header.value.speedKn > 0)) return null
+    try { return computeLegTable(valid, header.value.departureUtc, header.value.speedKn) }
+    catch { return null }
+  })
+
+  function load(view: PlanView) {
+    const p = view.plan
+    planId.value = p.id
+    version.value = p.version
+    status.value = p.status
+    header.value = { vesselId: p.vesselId, title: p.title, departureUtc: p.departureUtc, speedKn: p.speedKn, limitLat: p.limitLat, departurePlaceId: p.departurePlaceId, arrivalPlaceId: p.arrivalPlaceId }
+    waypoints.value = view.waypoints.map(w => ({ ...w }))
+    saved.value = snapshot()
+    undoStack.value = []
+    selected.value = null
+  }
+
+  function checkpoint(label: string) {
+    undoStack.value.push({ label, waypoints: waypoints.value.map(w => ({ ...w })) })
+    if (undoStack.value.length > 100) undoStack.value.shift()
+  }
+
+  function updateWaypoint(i: number, patch: Partial<Waypoint>) {
+    const current = waypoints.value[i]
+    if (current) waypoints.value[i] = { ...current, ...patch }
+  }
+
+  function moveWaypoint(i: number, to: { lat: number, lon: number }) {
+    updateWaypoint(i, { lat: to.lat, lon: ((((to.lon + 180) % 360) + 360) % 360) - 180 })
+  }
+
+  function insertWaypoint(at: number, w: Waypoint) {
+    checkpoint('insert waypoint')
+    waypoints.value.splice(at, 0, w)
+  }
+
+  function removeWaypoint(i: number) {
+    checkpoint('delete waypoint')
+    waypoints.value.splice(i, 1)
+  }
+
+  function reorder(from: number, to: number) {
+    if (to < 0 || to >= waypoints.value.length) return
+    checkpoint('reorder waypoints')
+    const [w] = waypoints.value.splice(from, 1)
+    waypoints.value.splice(to, 0, w!)
+  }
+
+  /** Track tools replace the list in one undoable step. */
+  function replaceWaypoints(list: Waypoint[], label: string) {
+    checkpoint(label)
+    waypoints.value = list
+  }
+
+  function undo() {
+    const last = undoStack.value.pop()
+    if (last) waypoints.value = last.waypoints
+  }
+
+  function markSaved(view: PlanView) {
+    load(view)
+  }
+
+  return { planId, version, status, header, waypoints, selected, undoStack, dirty, editable, legTable, load, checkpoint, updateWaypoint, moveWaypoint, insertWaypoint, removeWaypoint, reorder, replaceWaypoints, undo, markSaved }
+})
