@@ -1,0 +1,166 @@
+// What the plan chart draws, as plain coordinates: pure functions of the waypoints, no Leaflet.
+// Longitudes are unwrapped along the whole route so a passage across 180° is one continuous line
+// (Leaflet then draws it beyond ±180°, on the repeated world copy of the tiles).
+import type { LatLon, LegMethod } from '#shared/types/geo'
+import { densifyLeg, unwrapLongitudes } from '#shared/utils/track'
+import { geodesicDirect, geodesicInverse, geodesicVertex } from '#shared/utils/geodesic'
+import { greatEllipseDensify } from '#shared/utils/greatEllipse'
+import { rhumbInverse } from '#shared/utils/rhumb'
+import { normaliseCourse } from '#shared/utils/position'
+import { NM_M } from '#shared/utils/navConstants'
+
+export interface ChartWaypoint extends LatLon { method?: LegMethod, xteNm?: number | null }
+
+export interface ChartVertex extends LatLon { legIndex: number }
+
+export interface ChartGeometry {
+  /** The planned track, every leg densified by its own method, one continuous unwrapped line. */
+  track: LatLon[]
+  /** Waypoints at the unwrapped longitudes of the track. */
+  waypoints: LatLon[]
+  /** The rhumb line between the ends of each geodesic leg. */
+  rhumbAlternatives: LatLon[][]
+  /** One closed ring per leg with a cross-track limit: the band ±xteNm either side of the leg. */
+  corridors: LatLon[][]
+  /** Vertex (highest latitude) of each geodesic leg that lies between its ends. */
+  vertices: ChartVertex[]
+  /** The great ellipse between the ends of every leg (only when asked for). */
+  greatEllipses: LatLon[][]
+  /** The limiting parallel across the track's longitudes, in the track's hemisphere. */
+  limitParallel: LatLon[] | null
+  bounds: { south: number, west: number, north: number, east: number } | null
+}
+
+export interface ChartGeometryOptions {
+  stepNm?: number
+  limitLat?: number | null
+  greatEllipse?: boolean
+}
+
+interface LegShape { track: LatLon[], rhumb: LatLon[] | null, corridor: LatLon[] | null, vertex: LatLon | null }
+
+const signedDiff = (a: number, b: number) => ((((a - b) % 360) + 540) % 360) - 180
+
+/** Shift a line by whole turns so that it starts at the given (unwrapped) longitude. */
+function anchorAt(points: LatLon[], lon: number): LatLon[] {
+  const line = unwrapLongitudes(points)
+  const shift = lon + signedDiff(line[0]!.lon, lon) - line[0]!.lon
+  return shift === 0 ? line : line.map(p => ({ lat: p.lat, lon: p.lon + shift }))
+}
+
+/**
+ * Corridor ring: track points moved xteNm to port and to starboard along the geodesic perpendicular
+ * to the track there (geographiclib direct through the engine, Karney 2013), port side forward,
+ * starboard back. Offsets are taken at every `stride`-th densified point (the band is a chart
+ * overlay; a 40 nm chord of it is within a pixel of the curve at zoom 8).
+ */
+export function corridorRing(track: LatLon[], method: LegMethod, xteNm: number, stride = 1): LatLon[] {
+  const rhumbCourse = method === 'rhumb' ? rhumbInverse(track[0]!, track.at(-1)!).course : 0
+  const port: LatLon[] = []
+  const starboard: LatLon[] = []
+  const last = track.length - 1
+  for (let k = 0; k <= last; k = k === last ? last + 1 : Math.min(k + stride, last)) {
+    const p = track[k]!
+    let course = rhumbCourse
+    if (method === 'geodesic') course = k < last ? geodesicInverse(p, track[k + 1]!).initialCourse : geodesicInverse(track[k - 1]!, p).finalCourse
+    const left = geodesicDirect(p, normaliseCourse(course - 90), xteNm * NM_M)
+    const right = geodesicDirect(p, normaliseCourse(course + 90), xteNm * NM_M)
+    // Keep each offset within half a turn of its track point so the ring never spans the globe.
+    port.push({ lat: left.lat, lon: p.lon + signedDiff(left.lon, p.lon) })
+    starboard.push({ lat: right.lat, lon: p.lon + signedDiff(right.lon, p.lon) })
+  }
+  return [...port, ...starboard.reverse()]
+}
+
+/** Overlays (rhumb alternative, corridor) are sampled about every 40 nm: they are for the eye, the track is for the numbers. */
+const OVERLAY_STEP_NM = 40
+
+function legShape(a: ChartWaypoint, b: ChartWaypoint, stepNm: number): LegShape {
+  const method = b.method ?? 'rhumb'
+  let track: LatLon[]
+  // A leg the engine cannot sail (a rhumb line through a pole) still draws, as a straight segment.
+  try { track = densifyLeg(a, b, method, stepNm) }
+  catch { return { track: [{ lat: a.lat, lon: a.lon }, { lat: b.lat, lon: b.lon }], rhumb: null, corridor: null, vertex: null } }
+  const geodesic = method === 'geodesic'
+  const v = geodesic ? geodesicVertex(a, b) : null
+  return {
+    track,
+    rhumb: geodesic ? densifyLeg(a, b, 'rhumb', Math.max(stepNm, OVERLAY_STEP_NM)) : null,
+    corridor: b.xteNm && b.xteNm > 0 ? corridorRing(track, method, b.xteNm, Math.max(1, Math.round(OVERLAY_STEP_NM / stepNm))) : null,
+    vertex: v?.between ? { lat: v.lat, lon: v.lon } : null,
+  }
+}
+
+/**
+ * A geometry builder that remembers each leg's shape by its ends, method and XTE, so dragging one
+ * waypoint of a long plan recomputes only the two legs that touch it.
+ */
+export function createChartGeometry() {
+  let cache = new Map<string, LegShape>()
+
+  return function build(waypoints: readonly ChartWaypoint[], options: ChartGeometryOptions = {}): ChartGeometry {
+    const stepNm = options.stepNm ?? 10
+    const next = new Map<string, LegShape>()
+    const shapes: LegShape[] = []
+    for (let i = 1; i < waypoints.length; i++) {
+      const a = waypoints[i - 1]!
+      const b = waypoints[i]!
+      const key = `${a.lat},${a.lon},${b.lat},${b.lon},${b.method ?? 'rhumb'},${b.xteNm ?? ''},${stepNm}`
+      const shape = cache.get(key) ?? next.get(key) ?? legShape(a, b, stepNm)
+      next.set(key, shape)
+      shapes.push(shape)
+    }
+    cache = next
+    return assemble(waypoints, shapes, options)
+  }
+}
+
+function assemble(waypoints: readonly ChartWaypoint[], shapes: LegShape[], options: ChartGeometryOptions): ChartGeometry {
+  const joined: LatLon[] = waypoints.length ? [waypoints[0]!] : []
+  const starts: number[] = [0]
+  for (const s of shapes) {
+    for (let k = 1; k < s.track.length; k++) joined.push(s.track[k]!)
+    starts.push(joined.length - 1)
+  }
+  const track = unwrapLongitudes(joined)
+  const marks = starts.slice(0, waypoints.length).map(k => track[k]!).filter(Boolean)
+  const rhumbAlternatives: LatLon[][] = []
+  const corridors: LatLon[][] = []
+  const vertices: ChartVertex[] = []
+  const greatEllipses: LatLon[][] = []
+  shapes.forEach((s, i) => {
+    const start = marks[i]!.lon
+    if (s.rhumb) rhumbAlternatives.push(anchorAt(s.rhumb, start))
+    if (s.corridor) corridors.push(anchorAt(s.corridor, start))
+    if (s.vertex) vertices.push({ legIndex: i, lat: s.vertex.lat, lon: start + signedDiff(s.vertex.lon, start) })
+    if (options.greatEllipse) {
+      try { greatEllipses.push(anchorAt(greatEllipseDensify(waypoints[i]!, waypoints[i + 1]!, options.stepNm ?? 10), start)) }
+      catch { /* antipodal ends: no single great ellipse to draw */ }
+    }
+  })
+  const bounds = boundsOf(track)
+  return { track, waypoints: marks, rhumbAlternatives, corridors, vertices, greatEllipses, limitParallel: limitLine(track, bounds, options.limitLat), bounds }
+}
+
+function boundsOf(points: LatLon[]): ChartGeometry['bounds'] {
+  if (!points.length) return null
+  let south = 90, north = -90, west = Infinity, east = -Infinity
+  for (const p of points) {
+    south = Math.min(south, p.lat); north = Math.max(north, p.lat)
+    west = Math.min(west, p.lon); east = Math.max(east, p.lon)
+  }
+  return { south, west, north, east }
+}
+
+/** The limit parallel on the side of the equator where the track reaches farthest from it. */
+function limitLine(track: LatLon[], bounds: ChartGeometry['bounds'], limitLat?: number | null): LatLon[] | null {
+  if (!bounds || limitLat == null || !Number.isFinite(limitLat)) return null
+  const lat = Math.abs(bounds.north) >= Math.abs(bounds.south) ? Math.abs(limitLat) : -Math.abs(limitLat)
+  const margin = Math.max(10, (bounds.east - bounds.west) * 0.15)
+  return [{ lat, lon: bounds.west - margin }, { lat, lon: bounds.east + margin }]
+}
+
+/** Composable form for components: one builder per chart instance. */
+export function useChartGeometry() {
+  return createChartGeometry()
+}
