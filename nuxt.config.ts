@@ -2,7 +2,7 @@ import { fileURLToPath } from 'node:url'
 
 export default defineNuxtConfig({
   compatibilityDate: '2025-07-15',
-  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils'],
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', 'nuxt-security'],
   css: [
     '@fontsource/inter/400.css',
     '@fontsource/inter/500.css',
@@ -27,6 +27,37 @@ export default defineNuxtConfig({
     mailFrom: 'Passagewright <passages@kestrel-bight.example>',
     tileCacheDir: '',
     outboxWorker: 'on',
+    // Sealed-cookie sessions: no server state, so any number of instances share them.
+    session: { maxAge: 60 * 60 * 12, cookie: { httpOnly: true, sameSite: 'lax', secure: true } },
+  },
+  security: {
+    headers: {
+      contentSecurityPolicy: {
+        'default-src': ["'self'"],
+        'base-uri': ["'none'"],
+        'connect-src': ["'self'"],
+        'font-src': ["'self'", 'data:'],
+        'form-action': ["'self'"],
+        'frame-ancestors': ["'none'"],
+        'img-src': ["'self'", 'data:', 'blob:'],
+        'object-src': ["'none'"],
+        'script-src-attr': ["'none'"],
+        'script-src': ["'self'", "'strict-dynamic'", "'nonce-{{nonce}}'"],
+        // Leaflet positions its panes with inline style attributes.
+        'style-src': ["'self'", "'unsafe-inline'"],
+        'worker-src': ["'self'"],
+        'upgrade-insecure-requests': false,
+      },
+      xFrameOptions: 'DENY',
+      xContentTypeOptions: 'nosniff',
+      crossOriginEmbedderPolicy: false,
+    },
+    // Sign-in throttling is our own (server/utils/loginThrottle.ts); a global limiter would refuse busy offices.
+    rateLimiter: false,
+    xssValidator: false,
+    corsHandler: false,
+    requestSizeLimiter: { maxRequestSizeInBytes: 2_000_000, maxUploadFileRequestInBytes: 2_500_000, throwError: true },
+    removeLoggers: false,
   },
   hooks: {
     // Our API error handler runs first; pages still get Nuxt's error page.
