@@ -179,6 +179,12 @@ describe('bad files', () => {
     expect(error.message).not.toMatch(/root:/)
   })
 
+  it('XML nested deeper than a route ever is: 400, not a crash', () => {
+    const text = `<gpx version="1.1" creator="t">${'<x>'.repeat(50_000)}${'</x>'.repeat(50_000)}</gpx>`
+    const error = rejection(() => parseRouteFile('deep.gpx', undefined, Buffer.from(text)))
+    expect(error.statusCode).toBe(400)
+  })
+
   it('an ENTITY declaration without DOCTYPE is refused as well', () => {
     const text = '<route version="1.1"><!ENTITY a "b"><routeInfo routeName="x"/></route>'
     expect(rejection(() => parseRouteFile('x.rtz', undefined, Buffer.from(text))).kind).toBe('unsafe-xml')
@@ -285,6 +291,7 @@ const awkward: RouteFileWaypoint[] = [
   { name: 'Øresund \'west\' — ÆØÅ', lat: -0.00000004, lon: -5.5, method: 'geodesic', speedKn: 14, xteNm: 2, notes: '-5 kn current' },
   { name: 'Date line', lat: 47.123456789, lon: 180, method: 'geodesic', speedKn: 15.25, xteNm: 5, turnRadiusNm: 2 },
   { name: '', lat: 48.4933, lon: -124.9983, method: 'rhumb', speedKn: 9.75 },
+  { name: '\'=already quoted', lat: 48.5, lon: -123.5, method: 'rhumb', notes: '@ berth 3' },
 ]
 
 describe.each(['csv', 'gpx', 'rtz'] as const)('export → import round trip (%s)', (format: RouteFileFormat) => {

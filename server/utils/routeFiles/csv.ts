@@ -79,7 +79,7 @@ function readMethod(raw: RawRouteWaypoint, text: string) {
 
 /** Undoes the quote that spreadsheet-safe writers put before a leading =, +, -, @ (see `writeRouteCsv`). */
 function unescapeFormula(text: string) {
-  return /^'[=+\-@\t\r]/.test(text) ? text.slice(1) : text
+  return /^''*[=+\-@\t\r]/.test(text) ? text.slice(1) : text
 }
 
 /** Decimal comma, as spreadsheets in many locales write it in semicolon-separated files. */
@@ -173,6 +173,6 @@ export function writeRouteCsv(_plan: RouteFilePlan, waypoints: readonly RouteFil
     w.xteNm == null ? '' : formatRouteQuantity(w.xteNm),
     w.turnRadiusNm == null ? '' : formatRouteQuantity(w.turnRadiusNm),
     w.notes ?? '',
-  ].map((value, column) => (column === 0 || column === 7) && /^[=+\-@\t\r]/.test(value) ? `'${value}` : value))
+  ].map((value, column) => (column === 0 || column === 7) && /^'*[=+\-@\t\r]/.test(value) ? `'${value}` : value))
   return `${Papa.unparse({ fields: [...csvHeader], data: rows }, { newline: '\r\n' })}\r\n`
 }
