@@ -1,3 +1,4 @@
+import type { LandCheckResult } from '#shared/types/landCheck'
 import type { PlanDetail } from '#shared/types/plan'
 import type { Waypoint } from '#shared/types/waypoint'
 import { computeLegTable } from '#shared/utils/legTable'
@@ -27,10 +28,22 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
   const saved = ref<string>('')
   const undoStack = ref<{ label: string, waypoints: Waypoint[] }[]>([])
   const selected = ref<number | null>(null)
+  /** The plan as last loaded or saved (names, time zones, revision) for display. */
+  const plan = shallowRef<PlanDetail | null>(null)
+  /** False for roles that only read (shore, admin): nothing becomes editable for them. */
+  const roleMayEdit = ref(true)
+  /** Cells whose typed text cannot be read, keyed by cell; nothing is saved while any remain. */
+  const cellErrors = ref<Record<string, string>>({})
+  /** The last land check of the current track, cleared by any change to the waypoints. */
+  const landCheck = shallowRef<LandCheckResult | null>(null)
 
   const snapshot = () => JSON.stringify({ header: header.value, waypoints: waypoints.value })
   const dirty = computed(() => snapshot() !== saved.value)
-  const editable = computed(() => status.value === 'draft' || status.value === 'returned')
+  const savedParts = computed(() => (saved.value ? JSON.parse(saved.value) as { header: PlanHeaderDraft, waypoints: Waypoint[] } : null))
+  const headerDirty = computed(() => JSON.stringify(header.value) !== JSON.stringify(savedParts.value?.header))
+  const waypointsDirty = computed(() => JSON.stringify(waypoints.value) !== JSON.stringify(savedParts.value?.waypoints))
+  const editable = computed(() => roleMayEdit.value && (status.value === 'draft' || status.value === 'returned'))
+  const hasCellErrors = computed(() => Object.keys(cellErrors.value).length > 0)
 
   const legTable = computed(() => {
     const valid = waypoints.value.filter(w => Number.isFinite(w.lat) && Number.isFinite(w.lon))
@@ -41,6 +54,8 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
 
   function load(view: PlanView) {
     const p = view.plan
+    plan.value = p
+    landCheck.value = null
     planId.value = p.id
     version.value = p.version
     status.value = p.status
@@ -88,14 +103,36 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
     waypoints.value = list
   }
 
+  function setCellError(key: string, message: string | null) {
+    if (message) cellErrors.value = { ...cellErrors.value, [key]: message }
+    else if (key in cellErrors.value) {
+      const { [key]: _, ...rest } = cellErrors.value
+      cellErrors.value = rest
+    }
+  }
+
   function undo() {
     const last = undoStack.value.pop()
     if (last) waypoints.value = last.waypoints
+  }
+
+  /** Back to the last saved header and waypoints (as one undoable step for the waypoints). */
+  function revert() {
+    const last = savedParts.value
+    if (!last) return
+    header.value = { ...last.header }
+    replaceWaypoints(last.waypoints, 'discard changes')
   }
 
   function markSaved(view: PlanView) {
     load(view)
   }
 
-  return { planId, version, status, header, waypoints, selected, undoStack, dirty, editable, legTable, load, checkpoint, updateWaypoint, moveWaypoint, insertWaypoint, removeWaypoint, reorder, replaceWaypoints, undo, markSaved }
+  watch(waypoints, () => { landCheck.value = null }, { deep: true })
+
+  return {
+    planId, version, status, header, waypoints, selected, undoStack, dirty, headerDirty, waypointsDirty, editable, legTable, plan, roleMayEdit,
+    cellErrors, hasCellErrors, landCheck, load, checkpoint, updateWaypoint, moveWaypoint, insertWaypoint, removeWaypoint, reorder, replaceWaypoints,
+    undo, revert, markSaved, setCellError,
+  }
 })

@@ -26,7 +26,8 @@ export async function startServer(env: Record<string, string> = {}) {
     server: true,
     browser: false,
     setupTimeout: 120_000,
-    nuxtConfig: { nitro: { output: { dir: `${rootDir}.output` } } },
+    // PW_OUTPUT_DIR points the tests at a build made in another folder (side-by-side builds).
+    nuxtConfig: { nitro: { output: { dir: process.env.PW_OUTPUT_DIR || `${rootDir}.output` } } },
     env: { NUXT_DATABASE_URL: process.env.NUXT_DATABASE_URL, NUXT_SESSION_PASSWORD: process.env.NUXT_SESSION_PASSWORD!, ...env },
   })
   // The test context lives only in the file's top-level hooks; keep the address for nested suites.

@@ -1,0 +1,59 @@
+import type { Waypoint } from '#shared/types/waypoint'
+import type { LatLon } from '#shared/types/geo'
+
+const positionName = (p: LatLon) => `${formatLatitude(p.lat, 0)} ${formatLongitude(p.lon, 0)}`
+
+/** Track tools over the draft: each replaces the waypoint list in one undoable step. */
+export function useTrackTools() {
+  const store = usePlanDraftStore()
+
+  /** Split geodesic leg `leg` (waypoint leg → leg + 1) into rhumb-line legs every N° of longitude or N nm. */
+  function splitLeg(leg: number, every: number, unit: 'deg' | 'nm'): string {
+    const from = store.waypoints[leg]
+    const to = store.waypoints[leg + 1]
+    if (!from || !to) return 'Choose a leg to split.'
+    if (!(every > 0)) return 'The interval must be greater than 0.'
+    let points: LatLon[]
+    try { points = unit === 'deg' ? intermediateAtMeridians(from, to, every) : intermediateEveryNm(from, to, every) }
+    catch (e) { return (e as Error).message }
+    if (!points.length) return 'The leg is shorter than one interval: nothing to split.'
+    const added: Waypoint[] = points.map(p => ({ name: positionName(p), lat: p.lat, lon: p.lon, method: 'rhumb', speedKn: to.speedKn ?? null, xteNm: to.xteNm ?? null, turnRadiusNm: null, notes: null }))
+    const list = [...store.waypoints]
+    list.splice(leg + 1, 1, ...added, { ...to, method: 'rhumb' })
+    store.replaceWaypoints(list, `split leg ${leg + 1}`)
+    return `Leg ${leg + 1} split into ${added.length + 1} rhumb-line legs.`
+  }
+
+  /** Replace every geodesic leg whose vertex lies poleward of the limit with the composite track. */
+  function applyLimit(limitLat: number): string {
+    const limit = Math.abs(limitLat)
+    if (!(limit > 0 && limit < 90)) return 'Set a limiting latitude between 0° and 90°.'
+    const src = store.waypoints
+    const list: Waypoint[] = [src[0]!]
+    const notes: string[] = []
+    let replaced = 0
+    for (let i = 1; i < src.length; i++) {
+      const from = src[i - 1]!
+      const to = src[i]!
+      if (to.method === 'geodesic') {
+        const r = compositeSailing(from, to, limit)
+        if (r.kind === 'composite') {
+          const [, p1, p2] = r.points
+          const base = { speedKn: to.speedKn ?? null, xteNm: to.xteNm ?? null, turnRadiusNm: null, notes: null }
+          list.push({ ...base, name: positionName(p1!), lat: p1!.lat, lon: p1!.lon, method: 'geodesic' }, { ...base, name: positionName(p2!), lat: p2!.lat, lon: p2!.lon, method: 'rhumb' })
+          list.push({ ...to, method: 'geodesic' })
+          replaced++
+          continue
+        }
+        if (r.kind === 'end-beyond-limit') notes.push(`Leg ${i}: ${r.message}`)
+      }
+      list.push(to)
+    }
+    const poleward = list.filter(w => Math.abs(w.lat) > limit + 1e-9).length
+    if (poleward) notes.push(`${poleward} waypoint${poleward === 1 ? ' lies' : 's lie'} poleward of ${limit}°: move ${poleward === 1 ? 'it' : 'them'} by hand.`)
+    if (replaced) store.replaceWaypoints(list, `hold ${limit}°`)
+    return [replaced ? `${replaced} leg${replaced === 1 ? '' : 's'} replaced by the composite track at ${limit}°.` : `No geodesic leg goes beyond ${limit}°.`, ...notes].join(' ')
+  }
+
+  return { splitLeg, applyLimit }
+}
