@@ -1,0 +1,11 @@
+import { idParamsSchema } from '#shared/types/plan'
+import { remarkSchema } from '#shared/types/signoff'
+import { REMARK_ROLES } from '#shared/utils/signoffRules'
+
+export default defineEventHandler(async (event) => {
+  const user = await requireRole(event, REMARK_ROLES)
+  const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
+  const { remarks } = await readValidatedBody(event, remarkSchema.parse)
+  setResponseStatus(event, 201)
+  return addRemark(user, id, remarks)
+})

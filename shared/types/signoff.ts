@@ -1,0 +1,17 @@
+import { z } from 'zod'
+import { REMARKS_MAX } from '../utils/signoffRules'
+
+const remarksField = z.string({ error: 'remarks are required' }).trim()
+  .min(1, 'remarks are required').max(REMARKS_MAX, `remarks are at most ${REMARKS_MAX} characters`)
+
+/** Optional `version`: when the caller sends the version it looked at, a plan changed since then is refused (409). */
+const versionField = z.number({ error: 'version must be a number' }).int('version must be a whole number').positive('version must be positive').optional()
+
+export const signoffStepSchema = z.object({ version: versionField }).optional()
+export type SignoffStepInput = z.infer<typeof signoffStepSchema>
+
+export const returnPlanSchema = z.object({ remarks: remarksField, version: versionField })
+export type ReturnPlanInput = z.infer<typeof returnPlanSchema>
+
+export const remarkSchema = z.object({ remarks: remarksField })
+export type RemarkInput = z.infer<typeof remarkSchema>
