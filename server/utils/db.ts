@@ -10,7 +10,7 @@ export function useDb(): Knex {
     instance = knex({
       client: 'pg',
       connection: { connectionString: url, connectionTimeoutMillis: 3000 },
-      pool: { min: 0, max: 10, acquireTimeoutMillis: 5000 },
+      pool: { min: 0, max: 10, acquireTimeoutMillis: 10_000 },
     })
   }
   return instance

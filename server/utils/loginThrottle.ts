@@ -3,8 +3,8 @@ import type { H3Event } from 'h3'
 // Failed sign-ins per account and per client address within a sliding window. In memory per
 // instance: with N instances an attacker gets at most N times the budget, which still bounds it.
 const WINDOW_MS = 15 * 60_000
-const SLOW_AFTER = 5
-const REFUSE_AFTER = 10
+// An office shares one address, so the address budget is wider than an account's.
+const LIMITS = { acct: { slowAfter: 5, refuseAfter: 10 }, addr: { slowAfter: 20, refuseAfter: 50 } }
 const failures = new Map<string, number[]>()
 
 /** A scrypt hash of a random password, so unknown accounts take as long as known ones. */
@@ -22,12 +22,17 @@ function recent(key: string, now: number) {
 
 export async function assertLoginAllowed(event: H3Event, email: string) {
   const now = Date.now()
-  const worst = Math.max(...keys(event, email).map(k => recent(k, now).length))
-  if (worst >= REFUSE_AFTER) {
+  const [acct, addr] = keys(event, email).map(k => recent(k, now).length) as [number, number]
+  if (acct >= LIMITS.acct.refuseAfter || addr >= LIMITS.addr.refuseAfter) {
     setResponseHeader(event, 'retry-after', WINDOW_MS / 1000)
     throw createError({ statusCode: 429, statusMessage: 'Too many failed sign-ins; wait 15 minutes and try again' })
   }
-  if (worst >= SLOW_AFTER) await new Promise(r => setTimeout(r, Math.min(4000, 250 * 2 ** (worst - SLOW_AFTER))))
+  const over = Math.max(acct - LIMITS.acct.slowAfter, addr - LIMITS.addr.slowAfter)
+  if (over >= 0) {
+    const delayMs = Math.min(2000, 200 * 2 ** over)
+    setResponseHeader(event, 'x-signin-delay-ms', delayMs)
+    await new Promise(r => setTimeout(r, delayMs))
+  }
 }
 
 export function recordLoginFailure(event: H3Event, email: string) {

@@ -38,7 +38,15 @@ describe('sign-in and sessions', () => {
     expect(health.body.database).toBe('up')
   })
 
-  it('sign-out ends the session', async () => {
+  it('sets the session cookie httpOnly, SameSite=Lax and Secure', async () => {
+    const res = await anon.request('/api/auth/login', { method: 'POST', body: { email: 'shore@kestrel-bight.example', password: 'passage-demo' } })
+    const cookie = res.headers.getSetCookie().find(c => c.startsWith('nuxt-session='))!
+    expect(cookie).toMatch(/HttpOnly/i)
+    expect(cookie).toMatch(/SameSite=Lax/i)
+    expect(cookie).toMatch(/Secure/i)
+  })
+
+  it('sign-out ends the session, and a copy of the old cookie no longer works', async () => {
     const shore = await loginAs('shore')
     expect((await shore.request('/api/auth/me')).status).toBe(200)
     const out = await shore.request('/api/auth/logout', { method: 'POST' })
@@ -46,6 +54,8 @@ describe('sign-in and sessions', () => {
     const cleared = out.headers.getSetCookie().map(c => c.split(';')[0]).join('; ')
     expect(cleared).toMatch(/^nuxt-session=$/)
     expect((await client(cleared).request('/api/auth/me')).status).toBe(401)
+    expect((await shore.request('/api/auth/me')).status).toBe(401)
+    expect((await shore.request('/api/plans')).status).toBe(401)
   })
 })
 
@@ -66,5 +76,26 @@ describe('company scope on the passage board', () => {
 
   it('shows each demo state once at least (draft, submitted, approved, returned)', () => {
     expect(new Set(kestrel.map(p => p.status))).toEqual(new Set(['draft', 'submitted', 'approved', 'returned']))
+  })
+})
+
+describe('sign-in throttling', () => {
+  it('slows repeated failures for one account, then refuses with 429 even the right password', async () => {
+    const anon = client()
+    const email = 'relief.master@kestrel-bight.example'
+    const delays: number[] = []
+    for (let i = 0; i < 10; i++) {
+      const res = await anon.request('/api/auth/login', { method: 'POST', body: { email, password: `wrong-${i}` } })
+      delays.push(Number(res.headers.get('x-signin-delay-ms') ?? 0))
+      expect(res.status).toBe(401)
+    }
+    // The first five failures answer at once; from the sixth on each is held back longer.
+    expect(delays.slice(0, 5)).toEqual([0, 0, 0, 0, 0])
+    expect(delays.slice(5)).toEqual([200, 400, 800, 1600, 2000])
+    const refused = await anon.request('/api/auth/login', { method: 'POST', body: { email, password: 'passage-demo' } })
+    expect(refused.status).toBe(429)
+    expect(refused.headers.get('retry-after')).toBe('900')
+    // Another account from the same address is not locked out by this one.
+    expect((await loginAs('admin')).cookie).toMatch(/nuxt-session=/)
   })
 })
