@@ -1,0 +1,88 @@
+// Engine speed against raw geographiclib-geodesic, measured side by side in one run.
+// Rounds alternate between the two sides and the best round of each is kept, so that a busy
+// machine slows both alike. Run: npm run bench:engine
+import geodesic from 'geographiclib-geodesic'
+import { geodesicInverse } from '../shared/utils/geodesic'
+import { rhumbInverse } from '../shared/utils/rhumb'
+import { computeLegTable } from '../shared/utils/legTable'
+import type { LegTableWaypoint } from '../shared/utils/legTable'
+import { densifyRoute } from '../shared/utils/track'
+
+const G = geodesic.Geodesic
+const raw = G.WGS84
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 15)
+
+function seeded(seed: number) {
+  let a = seed >>> 0
+  return () => {
+    a = (a + 0x6D2B79F5) >>> 0
+    let t = a
+    t = Math.imul(t ^ (t >>> 15), t | 1)
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
+  }
+}
+
+/** Best time (ms) of each side over alternating rounds. */
+function sideBySide(a: () => void, b: () => void): [number, number] {
+  let bestA = Infinity
+  let bestB = Infinity
+  a(); b() // warm-up
+  for (let r = 0; r < ROUNDS; r++) {
+    let t = performance.now(); a(); bestA = Math.min(bestA, performance.now() - t)
+    t = performance.now(); b(); bestB = Math.min(bestB, performance.now() - t)
+  }
+  return [bestA, bestB]
+}
+
+const rnd = seeded(1852)
+const N = 20_000
+const lat = new Float64Array(N)
+const lon = new Float64Array(N)
+for (let i = 0; i < N; i++) { lat[i] = Math.asin(2 * rnd() - 1) * 180 / Math.PI; lon[i] = 360 * rnd() - 180 }
+const pts = Array.from({ length: N }, (_, i) => ({ lat: lat[i]!, lon: lon[i]! }))
+let sink = 0
+
+const rawInverse = () => { for (let i = 1; i < N; i++) sink += raw.Inverse(lat[i - 1]!, lon[i - 1]!, lat[i]!, lon[i]!, G.DISTANCE | G.AZIMUTH).s12! }
+const engineInverse = () => { for (let i = 1; i < N; i++) sink += geodesicInverse(pts[i - 1]!, pts[i]!).distanceM }
+const engineRhumb = () => { for (let i = 1; i < N; i++) sink += rhumbInverse(pts[i - 1]!, pts[i]!).distanceM }
+
+// A 500-waypoint ocean plan of geodesic legs of 40–200 nm, heading round the world
+const plan: LegTableWaypoint[] = [{ name: 'WP1', lat: 30, lon: -170 }]
+let course = 80
+for (let i = 1; i < 500; i++) {
+  course += (rnd() - 0.5) * 40
+  const prev = plan[i - 1]!
+  const d = raw.Direct(prev.lat, prev.lon, course, (40 + 160 * rnd()) * 1852)
+  if (Math.abs(d.lat2!) > 60) course += 180
+  plan.push({ name: `WP${i + 1}`, lat: d.lat2!, lon: d.lon2!, method: 'geodesic', turnRadiusNm: 1 })
+}
+const STEP_NM = 10
+const engineTable = () => {
+  const t = computeLegTable(plan, '2026-06-01T00:00:00Z', 14)
+  const track = densifyRoute(plan, STEP_NM)
+  sink += t.totals.distanceNm + track.length
+}
+const rawTable = () => {
+  for (let i = 1; i < plan.length; i++) {
+    const a = plan[i - 1]!
+    const b = plan[i]!
+    const inv = raw.Inverse(a.lat, a.lon, b.lat, b.lon, G.DISTANCE | G.AZIMUTH)
+    const line = raw.InverseLine(a.lat, a.lon, b.lat, b.lon, G.LATITUDE | G.LONGITUDE | G.DISTANCE_IN)
+    const steps = Math.max(1, Math.ceil(line.s13 / (STEP_NM * 1852)))
+    for (let k = 1; k < steps; k++) sink += line.Position(line.s13 * k / steps, G.LATITUDE | G.LONGITUDE).lat2!
+    sink += inv.s12!
+  }
+}
+
+const rate = (ms: number) => `${Math.round((N - 1) / ms * 1000).toLocaleString('en-GB').padStart(10)} /s`
+const [tEngine, tRaw] = sideBySide(engineInverse, rawInverse)
+const [tRhumb, tRaw2] = sideBySide(engineRhumb, rawInverse)
+const [tTable, tRawTable] = sideBySide(engineTable, rawTable)
+const trackPoints = densifyRoute(plan, STEP_NM).length
+
+console.log(`Passagewright engine benchmark (best of ${ROUNDS} alternating rounds; ${N - 1} random pairs)`)
+console.log(`  geodesic inverse   engine ${rate(tEngine)}   raw geographiclib ${rate(tRaw)}   ratio ${(tRaw / tEngine).toFixed(2)}×  (goal ≥ 0.90×)`)
+console.log(`  rhumb inverse      engine ${rate(tRhumb)}   raw geodesic      ${rate(tRaw2)}   ratio ${(tRaw2 / tRhumb).toFixed(2)}×  (goal ≥ 1.00×)`)
+console.log(`  500-waypoint plan  leg table + ${STEP_NM}-nm track (${trackPoints} points) ${tTable.toFixed(2)} ms   raw calls ${tRawTable.toFixed(2)} ms   ratio ${(tTable / tRawTable).toFixed(2)}×  (goal ≤ 2.00×)`)
+if (Number.isNaN(sink)) console.log('')
