@@ -21,6 +21,11 @@ export interface CrossTrackResult {
 /** Foot of the perpendicular from `position` to the geodesic from → to; steps b = atan2(sin c · cos Δα, cos c) until below 1 µm. */
 export function crossTrack(from: LatLon, to: LatLon, position: LatLon): CrossTrackResult {
   const line = geod.InverseLine(from.lat, from.lon, to.lat, to.lon, G.LATITUDE | G.LONGITUDE | G.AZIMUTH | G.DISTANCE_IN)
+  if (line.s13 === 0) {
+    // A leg without length has no direction: the distance from its start, unsigned.
+    const d = geod.Inverse(from.lat, from.lon, position.lat, position.lon, G.DISTANCE).s12!
+    return { crossTrackM: d, alongTrackM: 0, foot: { lat: from.lat, lon: from.lon }, iterations: 0 }
+  }
   let s = 0
   let xt = 0
   let foot: LatLon = { lat: from.lat, lon: from.lon }
