@@ -66,7 +66,8 @@ export async function getPlanView(user: SessionUser, id: number) {
   const plan = await findPlan(user, id)
   const waypoints = await loadWaypoints(id)
   const { legs, totals } = legTableFor(plan, waypoints)
-  return { plan, waypoints, legs, totals, events: await listEvents(id) }
+  const fuel = await fuelForPlan(user.companyId, plan.vesselId, legs)
+  return { plan, waypoints, legs, totals, fuel, events: await listEvents(id) }
 }
 
 export async function recordEvent(db: Knex | Knex.Transaction, planId: number, user: SessionUser, kind: string, from: string | null, to: string | null, remarks: string | null = null) {

@@ -1,0 +1,11 @@
+import { z } from 'zod'
+import { placeSchema } from '#shared/types/place'
+
+const params = z.object({ id: z.coerce.number().int().positive() })
+
+export default defineEventHandler(async (event) => {
+  const user = await requireRole(event, SHORE_DESK)
+  const { id } = await getValidatedRouterParams(event, params.parse)
+  const body = await readValidatedBody(event, placeSchema.parse)
+  return updatePlace(user, id, body)
+})

@@ -1,0 +1,41 @@
+import { z } from 'zod'
+import { imoNumberSchema } from './imo'
+import { fuelPointsSchema, type FuelPoint } from './fuel'
+import type { FuelCurve } from '../utils/fuel'
+
+/** Particulars an admin edits. */
+export const vesselUpdateSchema = z.object({
+  name: z.string({ error: 'name is required' }).trim().min(1, 'name is required').max(80, 'name is at most 80 characters'),
+  imoNumber: imoNumberSchema,
+  callSign: z.string({ error: 'callSign is required' }).trim().toUpperCase().min(3, 'callSign is 3 to 12 letters and digits')
+    .max(12, 'callSign is 3 to 12 letters and digits').regex(/^[A-Z0-9]+$/, 'callSign is letters and digits only'),
+  serviceSpeedKn: z.number({ error: 'serviceSpeedKn must be a number' }).finite().gt(0, 'serviceSpeedKn must be greater than 0').max(60, 'serviceSpeedKn is at most 60'),
+  masterUserId: z.number({ error: 'masterUserId must be a user id or null' }).int().positive().nullable(),
+})
+export type VesselUpdateInput = z.infer<typeof vesselUpdateSchema>
+
+export const crewMemberSchema = z.object({
+  name: z.string({ error: 'name is required' }).trim().min(1, 'name is required').max(120, 'name is at most 120 characters'),
+  rank: z.string({ error: 'rank is required' }).trim().min(1, 'rank is required').max(60, 'rank is at most 60 characters'),
+  email: z.string({ error: 'email is required' }).trim().toLowerCase().email('email must be an e-mail address').max(254),
+})
+export type CrewMember = z.infer<typeof crewMemberSchema>
+
+export const crewListSchema = z.object({ crew: z.array(crewMemberSchema).max(100, 'a crew list has at most 100 people') })
+export const vesselFuelSchema = z.object({ points: fuelPointsSchema })
+
+export interface VesselDetail {
+  id: number
+  name: string
+  imoNumber: string
+  callSign: string
+  serviceSpeedKn: number
+  masterUserId: number | null
+  masterName: string | null
+  crew: (CrewMember & { id: number })[]
+  fuelPoints: FuelPoint[]
+  /** t/day = c·V^k fitted to the points; null with fewer than two. */
+  fuelCurve: FuelCurve | null
+  /** Masters of the company, for the assignment list. */
+  masters: { id: number, name: string }[]
+}
