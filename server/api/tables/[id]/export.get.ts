@@ -1,0 +1,11 @@
+import { distanceTableParamsSchema } from '#shared/types/distanceTable'
+
+export default defineEventHandler(async (event) => {
+  const user = await requireRole(event, ALL_ROLES)
+  const { id } = await getValidatedRouterParams(event, distanceTableParamsSchema.parse)
+  const table = await getTable(user, id)
+  if (table.status !== 'ready' || !table.matrix) throw createError({ statusCode: 409, statusMessage: 'The table is not built yet' })
+  setHeader(event, 'content-type', 'text/csv; charset=utf-8')
+  setHeader(event, 'content-disposition', `attachment; filename="distance-table-${table.id}.csv"`)
+  return distanceTableCsv(table)
+})

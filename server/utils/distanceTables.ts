@@ -1,0 +1,162 @@
+// Distance tables (capability 9): saved, named tables of distances between chosen places,
+// taken from the company's approved plans, else the direct geodesic (flagged, and flagged
+// again when it crosses the coarse coastline). Small tables are built inside the request;
+// larger ones by a job on the shared pg-boss queue, which any worker process may take.
+import type { Knex } from 'knex'
+import type { SessionUser } from '#shared/types/auth'
+import type { Role } from '#shared/types/auth'
+import {
+  DEFAULT_TABLE_RADIUS_NM, IMMEDIATE_TABLE_PLACES,
+  type DistanceMatrix, type DistanceTableCreateInput, type DistanceTableDetail, type DistanceTableSummary, type TablePlace, type TablePlan,
+} from '#shared/types/distanceTable'
+import { choosePlans, fillRows, pairCount, pairIndex, rowChunks } from '#shared/utils/distanceTable'
+import { computeLegTable } from '#shared/utils/legTable'
+import { LAND_STEP_NM, geodesicCrossesLand } from './landCrossing'
+
+export const TABLE_BUILDERS = ['shore', 'admin'] as const satisfies readonly Role[]
+/** Share of the progress bar for the distance pass; the land pass takes the rest. */
+const DISTANCE_SHARE = 0.2
+/** Work between yields to the event loop (and progress writes), in milliseconds. */
+const SLICE_MS = 150
+
+const iso = (v: unknown) => (v ? new Date(v as string).toISOString() : null)
+
+function toSummary(row: any): DistanceTableSummary {
+  return {
+    id: row.id, name: row.name, status: row.status, progress: Number(row.progress), placeCount: row.places.length,
+    radiusNm: Number(row.radius_nm), builtAt: iso(row.built_at), createdAt: iso(row.created_at)!, error: row.error ?? null,
+  }
+}
+
+export async function listTables(user: SessionUser): Promise<DistanceTableSummary[]> {
+  const rows = await useDb()('distance_tables').where('company_id', user.companyId).orderBy('created_at', 'desc')
+    .select('id', 'name', 'status', 'progress', 'places', 'radius_nm', 'built_at', 'created_at', 'error')
+  return rows.map(toSummary)
+}
+
+async function findRow(user: SessionUser, id: number, db: Knex = useDb()) {
+  const row = await db('distance_tables').where({ id, company_id: user.companyId }).first()
+  if (!row) notFound('Distance table')
+  return row
+}
+
+export async function getTable(user: SessionUser, id: number): Promise<DistanceTableDetail> {
+  const row = await findRow(user, id)
+  return { ...toSummary(row), places: row.places, matrix: row.matrix ?? null }
+}
+
+/** The chosen places of the company, by name; 400 naming the ids that are not in the library. */
+async function loadPlaces(companyId: number, ids: number[]): Promise<TablePlace[]> {
+  const rows = await useDb()('places').where('company_id', companyId).whereIn('id', ids).orderBy('name').select('id', 'name', 'lat', 'lon')
+  const missing = ids.filter(id => !rows.some(r => r.id === id))
+  if (missing.length) throw createError({ statusCode: 400, statusMessage: `placeIds: unknown place ${missing.join(', ')}`, data: { missing } })
+  return rows
+}
+
+/** Every approved plan of the company reduced to its end points and leg-table total, once per build. */
+export async function loadApprovedPlans(companyId: number): Promise<TablePlan[]> {
+  const db = useDb()
+  const plans = await db('plans').where({ company_id: companyId, status: 'approved' }).select('id', 'title', 'departure_utc', 'speed_kn')
+  if (!plans.length) return []
+  const points = await db('waypoints').whereIn('plan_id', plans.map(p => p.id)).orderBy(['plan_id', 'seq'])
+    .select('plan_id', 'name', 'lat', 'lon', 'method', 'speed_kn')
+  const out: TablePlan[] = []
+  for (const p of plans) {
+    const wps = points.filter(w => w.plan_id === p.id).map(w => ({ name: w.name, lat: w.lat, lon: w.lon, method: w.method, speedKn: w.speed_kn == null ? null : Number(w.speed_kn) }))
+    if (wps.length < 2) continue
+    const { totals } = computeLegTable(wps, p.departure_utc, Number(p.speed_kn))
+    out.push({ id: p.id, title: p.title, start: wps[0]!, end: wps[wps.length - 1]!, distanceNm: totals.distanceNm })
+  }
+  return out
+}
+
+export async function createTable(user: SessionUser, input: DistanceTableCreateInput) {
+  const places = await loadPlaces(user.companyId, input.placeIds)
+  const [row] = await useDb()('distance_tables').insert({
+    company_id: user.companyId, name: input.name, places: JSON.stringify(places),
+    radius_nm: input.radiusNm ?? DEFAULT_TABLE_RADIUS_NM, created_by: user.id,
+  }).returning(['id', 'generation'])
+  return startBuild(user, row.id, row.generation, places.length)
+}
+
+export async function rebuildTable(user: SessionUser, id: number) {
+  const row = await findRow(user, id)
+  const current = await useDb()('places').where('company_id', user.companyId).whereIn('id', row.places.map((p: TablePlace) => p.id)).orderBy('name').select('id', 'name', 'lat', 'lon')
+  if (current.length < 2) throw createError({ statusCode: 409, statusMessage: 'Fewer than 2 of the table\'s places are left in the library' })
+  const [next] = await useDb()('distance_tables').where({ id }).update({
+    places: JSON.stringify(current), status: 'building', progress: 0, error: null, generation: useDb().raw('generation + 1'),
+  }).returning(['generation'])
+  return startBuild(user, id, next.generation, current.length)
+}
+
+/** Small tables are built now; larger ones are queued. `queued` tells the route to answer 202. */
+async function startBuild(user: SessionUser, id: number, generation: number, placeCount: number) {
+  if (placeCount <= IMMEDIATE_TABLE_PLACES) {
+    await runBuild(id, generation)
+    return { queued: false, table: await getTable(user, id) }
+  }
+  await enqueueTableBuild(id, generation)
+  return { queued: true, table: await getTable(user, id) }
+}
+
+export async function deleteTable(user: SessionUser, id: number) {
+  await findRow(user, id)
+  await useDb()('distance_tables').where({ id, company_id: user.companyId }).delete()
+}
+
+/** Writes progress (or the result) only while this build's generation is still the row's. */
+async function writeIfCurrent(id: number, generation: number, values: Record<string, unknown>): Promise<boolean> {
+  return (await useDb()('distance_tables').where({ id, generation, status: 'building' }).update(values)) > 0
+}
+
+const yieldToLoop = () => new Promise<void>(resolve => setImmediate(resolve))
+
+/**
+ * Builds one generation of a table: plan choice, then distances row by row, then the land check
+ * of the direct pairs, yielding every SLICE_MS and writing progress as it goes. Returns quietly
+ * when the table was deleted or rebuilt meanwhile. Safe to run again after a crash.
+ */
+export async function runBuild(id: number, generation: number): Promise<void> {
+  const row = await useDb()('distance_tables').where({ id, generation, status: 'building' }).first()
+  if (!row) return
+  try {
+    const places: TablePlace[] = row.places
+    const n = places.length
+    const plans = await loadApprovedPlans(row.company_id)
+    const choice = choosePlans(places, plans, Number(row.radius_nm))
+    const distance = new Float64Array(pairCount(n))
+    let sliceStart = performance.now()
+    const pause = async (progress: number) => {
+      if (performance.now() - sliceStart < SLICE_MS) return true
+      if (!(await writeIfCurrent(id, generation, { progress: Math.min(0.99, progress) }))) return false
+      await yieldToLoop()
+      sliceStart = performance.now()
+      return true
+    }
+    for (const [from, to] of rowChunks(n, 500)) {
+      fillRows(places, choice, distance, from, to)
+      if (!(await pause((DISTANCE_SHARE * to) / n))) return
+    }
+    const crossesLand: (boolean | null)[] = Array.from({ length: distance.length }, () => null)
+    for (let i = 0; i < n - 1; i++) {
+      for (let j = i + 1; j < n; j++) {
+        const k = pairIndex(i, j, n)
+        if (!choice.planId[k]) crossesLand[k] = geodesicCrossesLand(places[i]!.lat, places[i]!.lon, places[j]!.lat, places[j]!.lon)
+      }
+      if (!(await pause(DISTANCE_SHARE + ((1 - DISTANCE_SHARE) * (i + 1)) / (n - 1)))) return
+    }
+    const used = new Set(choice.planId.filter(p => p > 0))
+    const matrix: DistanceMatrix = {
+      distanceNm: Array.from(distance, d => Math.round(d * 1000) / 1000),
+      planId: Array.from(choice.planId, p => p || null),
+      crossesLand,
+      plans: plans.filter(p => used.has(p.id)).map(p => ({ id: p.id, title: p.title })),
+      landStepNm: LAND_STEP_NM,
+    }
+    await writeIfCurrent(id, generation, { matrix: JSON.stringify(matrix), status: 'ready', progress: 1, built_at: useDb().fn.now() })
+  }
+  catch (error: any) {
+    console.error(`[tables] build of table ${id} failed:`, error)
+    await writeIfCurrent(id, generation, { status: 'failed', error: 'The build failed; try a rebuild.' })
+  }
+}

@@ -1,0 +1,56 @@
+import { z } from 'zod'
+
+export const DEFAULT_TABLE_RADIUS_NM = 30
+/** Tables up to this many places are built inside the request; larger ones go to the job queue. */
+export const IMMEDIATE_TABLE_PLACES = 50
+export const MAX_TABLE_PLACES = 300
+
+export const distanceTableCreateSchema = z.object({
+  name: z.string({ error: 'name is required' }).trim().min(1, 'name is required').max(120, 'name is at most 120 characters'),
+  placeIds: z.array(z.number().int().positive(), { error: 'placeIds must be a list of place ids' })
+    .min(2, 'choose at least 2 places').max(MAX_TABLE_PLACES, `choose at most ${MAX_TABLE_PLACES} places`)
+    .refine(ids => new Set(ids).size === ids.length, 'a place is chosen twice'),
+  radiusNm: z.number({ error: 'radiusNm must be a number' }).finite().positive('radiusNm must be greater than 0').max(500, 'radiusNm is at most 500').optional(),
+})
+export type DistanceTableCreateInput = z.infer<typeof distanceTableCreateSchema>
+
+export const distanceTableParamsSchema = z.object({ id: z.coerce.number().int().positive() })
+
+export type DistanceTableStatus = 'building' | 'ready' | 'failed'
+
+/** A place as the table saw it when it was built. */
+export interface TablePlace { id: number, name: string, lat: number, lon: number }
+
+/** An approved plan reduced to what the table needs: its end points and total distance. */
+export interface TablePlan { id: number, title: string, start: { lat: number, lon: number }, end: { lat: number, lon: number }, distanceNm: number }
+
+/**
+ * The pairs of a table of n places, upper triangle row by row (pair (i, j), i < j, sits at
+ * pairIndex(i, j, n)); distances are symmetric, so each pair is stored once.
+ * planId: the shortest approved plan used, or null for a direct geodesic.
+ * crossesLand: for direct pairs, whether the geodesic crosses the coarse coastline; null for plan pairs.
+ */
+export interface DistanceMatrix {
+  distanceNm: number[]
+  planId: (number | null)[]
+  crossesLand: (boolean | null)[]
+  plans: { id: number, title: string }[]
+  landStepNm: number
+}
+
+export interface DistanceTableSummary {
+  id: number
+  name: string
+  status: DistanceTableStatus
+  progress: number
+  placeCount: number
+  radiusNm: number
+  builtAt: string | null
+  createdAt: string
+  error: string | null
+}
+
+export interface DistanceTableDetail extends DistanceTableSummary {
+  places: TablePlace[]
+  matrix: DistanceMatrix | null
+}

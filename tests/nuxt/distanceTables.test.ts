@@ -1,0 +1,116 @@
+// Distance tables against the seeded demo data: the approved Cape of Good Hope – Fremantle plan
+// gives its own distance; Rotterdam – New York has no approved plan (the seed's is 'submitted'),
+// so the table falls back to the direct geodesic, checked against GeodSolve as the oracle.
+import { execFileSync } from 'node:child_process'
+import { beforeAll, describe, expect, it } from 'vitest'
+import { type Api, loginAs, startServer } from '../support/server'
+
+await startServer()
+
+/** GeodSolve (GeographicLib's own command-line tool, Karney) as the oracle: distance in nm. */
+function geodSolveNm(a: { lat: number, lon: number }, b: { lat: number, lon: number }): number {
+  const out = execFileSync('GeodSolve', ['-i', '-p', '9'], { input: `${a.lat} ${a.lon} ${b.lat} ${b.lon}\n` }).toString()
+  return Number(out.trim().split(/\s+/)[2]) / 1852
+}
+
+const pair = (i: number, j: number, n: number) => (i < j ? i * n - (i * (i + 1)) / 2 + (j - i - 1) : pair(j, i, n))
+
+describe('distance tables', () => {
+  let shore: Api
+  let places: any[]
+  const byName = (name: string) => places.find(p => p.name === name)
+
+  beforeAll(async () => {
+    shore = await loginAs('shore')
+    places = (await shore.request('/api/places')).body
+  })
+
+  it('takes the approved plan between its end places and links it; a pair without one is the direct geodesic, flagged', async () => {
+    const names = ['Cape of Good Hope offing', 'Fremantle pilot boarding ground', 'Rotterdam', 'New York']
+    const res = await shore.request('/api/tables', { method: 'POST', body: { name: 'Test four', placeIds: names.map(n => byName(n).id) } })
+    expect(res.status).toBe(201)
+    const t = res.body
+    expect(t.status).toBe('ready')
+    expect(t.progress).toBe(1)
+    expect(t.radiusNm).toBe(30)
+    const n = t.places.length
+    const idx = (name: string) => t.places.findIndex((p: any) => p.name === name)
+
+    const plans = (await shore.request('/api/plans')).body
+    const cape = plans.find((p: any) => p.title === 'Cape of Good Hope – Fremantle, held at 40°S')
+    const view = (await shore.request(`/api/plans/${cape.id}`)).body
+    const k = pair(idx('Cape of Good Hope offing'), idx('Fremantle pilot boarding ground'), n)
+    expect(t.matrix.planId[k]).toBe(cape.id)
+    expect(t.matrix.distanceNm[k]).toBeCloseTo(view.totals.distanceNm, 2)
+    expect(t.matrix.crossesLand[k]).toBeNull()
+    expect(t.matrix.plans).toContainEqual({ id: cape.id, title: cape.title })
+
+    const r = pair(idx('Rotterdam'), idx('New York'), n)
+    expect(t.matrix.planId[r]).toBeNull()
+    const oracle = geodSolveNm(byName('Rotterdam'), byName('New York'))
+    expect(Math.abs(t.matrix.distanceNm[r] - oracle)).toBeLessThan(0.001)
+    expect(typeof t.matrix.crossesLand[r]).toBe('boolean')
+
+    // The geodesic from the Cape to Rotterdam runs over Africa: flagged as crossing land.
+    expect(t.matrix.crossesLand[pair(idx('Cape of Good Hope offing'), idx('Rotterdam'), n)]).toBe(true)
+  })
+
+  it('lets planners and masters read but not build, rebuild or delete (403)', async () => {
+    const planner = await loginAs('planner')
+    const master = await loginAs('master')
+    const ids = places.slice(0, 3).map(p => p.id)
+    expect((await planner.request('/api/tables', { method: 'POST', body: { name: 'Nope', placeIds: ids } })).status).toBe(403)
+    const made = await shore.request('/api/tables', { method: 'POST', body: { name: 'Readable', placeIds: ids, radiusNm: 10 } })
+    expect(made.status).toBe(201)
+    expect((await master.request('/api/tables')).body.some((t: any) => t.id === made.body.id)).toBe(true)
+    expect((await planner.request(`/api/tables/${made.body.id}`)).status).toBe(200)
+    expect((await planner.request(`/api/tables/${made.body.id}/rebuild`, { method: 'POST' })).status).toBe(403)
+    expect((await master.request(`/api/tables/${made.body.id}`, { method: 'DELETE' })).status).toBe(403)
+    const admin = await loginAs('admin')
+    expect((await admin.request(`/api/tables/${made.body.id}/rebuild`, { method: 'POST' })).status).toBe(200)
+    expect((await admin.request(`/api/tables/${made.body.id}`, { method: 'DELETE' })).status).toBe(204)
+    expect((await shore.request(`/api/tables/${made.body.id}`)).status).toBe(404)
+  })
+
+  it('keeps tables within the company (404) and refuses other companies\' places', async () => {
+    const ids = places.slice(0, 2).map(p => p.id)
+    const made = await shore.request('/api/tables', { method: 'POST', body: { name: 'Private', placeIds: ids } })
+    const other = await loginAs('otherPlanner')
+    expect((await other.request(`/api/tables/${made.body.id}`)).status).toBe(404)
+    expect((await other.request(`/api/tables/${made.body.id}/export`)).status).toBe(404)
+    expect((await other.request('/api/tables')).body.some((t: any) => t.id === made.body.id)).toBe(false)
+    const bad = await shore.request('/api/tables', { method: 'POST', body: { name: 'Foreign', placeIds: [ids[0], 999999] } })
+    expect(bad.status).toBe(400)
+    expect(bad.body.message).toMatch(/placeIds/)
+  })
+
+  it('answers bad input with 400 naming the field', async () => {
+    const one = await shore.request('/api/tables', { method: 'POST', body: { name: 'One', placeIds: [places[0].id] } })
+    expect(one.status).toBe(400)
+    expect(one.body.message).toMatch(/placeIds/)
+    const noName = await shore.request('/api/tables', { method: 'POST', body: { name: ' ', placeIds: [places[0].id, places[1].id] } })
+    expect(noName.status).toBe(400)
+    expect(noName.body.message).toMatch(/name/)
+    const radius = await shore.request('/api/tables', { method: 'POST', body: { name: 'R', placeIds: [places[0].id, places[1].id], radiusNm: -1 } })
+    expect(radius.status).toBe(400)
+    expect((await shore.request('/api/tables/abc')).status).toBe(400)
+  })
+
+  it('exports CSV: place names as header, distances to one decimal, source marks and a key', async () => {
+    const names = ['Cape of Good Hope offing', 'Fremantle pilot boarding ground', 'Rotterdam', 'New York']
+    const made = await shore.request('/api/tables', { method: 'POST', body: { name: 'Export', placeIds: names.map(n => byName(n).id) } })
+    const res = await shore.request(`/api/tables/${made.body.id}/export`)
+    expect(res.status).toBe(200)
+    expect(res.headers.get('content-type')).toMatch(/text\/csv/)
+    const lines = String(res.body).split('\r\n')
+    const header = lines[0]!.split(',')
+    expect(header[0]).toBe('Distance (nm)')
+    expect(header.slice(1).sort()).toEqual([...names].sort())
+    const row = lines.find(l => l.startsWith('Rotterdam,'))!.split(',')
+    const oracle = geodSolveNm(byName('Rotterdam'), byName('New York'))
+    expect(row[header.indexOf('New York')]).toBe(oracle.toFixed(1))
+    expect(lines).toContain('D,direct — not a sailing route')
+    expect(lines.some(l => l.startsWith('Source,'))).toBe(true)
+    expect(lines.some(l => /^P\d+,"approved plan: Cape of Good Hope – Fremantle, held at 40°S"$/.test(l))).toBe(true)
+  })
+})
