@@ -1,0 +1,126 @@
+import { beforeAll, describe, expect, it } from 'vitest'
+import type { Page } from 'playwright-core'
+import { demoPlans } from '../../db/seeds/demoData'
+import { loginAs, startServer } from '../support/server'
+import { shoot, signIn, useBrowser } from '../support/browser'
+
+await startServer()
+const browser = useBrowser()
+const TITLE = 'Yokohama – Juan de Fuca, North Pacific crossing'
+const LIMIT = 48.75
+let planId = 0
+
+// Each run starts from the seeded waypoints, whatever an earlier run saved.
+beforeAll(async () => {
+  const api = await loginAs('planner')
+  const plans = (await api.request('/api/plans')).body as { id: number, title: string }[]
+  planId = plans.find(p => p.title === TITLE)!.id
+  const { plan } = (await api.request(`/api/plans/${planId}`)).body
+  const seed = demoPlans.find(p => p.title === TITLE)!
+  const waypoints = seed.waypoints.map(([name, lat, lon, method]) => ({ name, lat, lon, method }))
+  const res = await api.request(`/api/plans/${planId}/waypoints`, { method: 'PUT', body: { version: plan.version, waypoints } })
+  expect(res.status).toBe(200)
+})
+
+const rows = (page: Page) => page.getByTestId('waypoint-row')
+const totalNm = async (page: Page) => Number((await page.getByTestId('total-distance').textContent())!.replace(/,/g, ''))
+const latitudes = (page: Page) => rows(page).evaluateAll(els => els.map(e => Number(e.getAttribute('data-lat'))))
+
+describe('plan workspace', () => {
+  it('edits, splits, holds a limiting latitude and saves the Yokohama – Juan de Fuca draft', async () => {
+    const page = await browser.newPage(1600, 1000)
+    await signIn(page, 'planner')
+    await page.goto(`/plans/${planId}`)
+    await page.getByTestId('plan-workspace').waitFor()
+    expect(await rows(page).count()).toBe(4)
+    expect(await page.getByTestId('save-state').textContent()).toBe('saved')
+    await shoot(page, 'workspace-loaded')
+
+    // Edit the offing position as a navigator types it: the leg table follows.
+    const before = await totalNm(page)
+    const legBefore = await page.getByTestId('leg-1').getByTestId('leg-distance').textContent()
+    const pos = page.getByTestId('wp-position-1').locator('input')
+    await pos.fill('34 30.0N 140 30.0E')
+    await pos.press('Enter')
+    await expect.poll(() => totalNm(page)).not.toBe(before)
+    expect(await page.getByTestId('leg-1').getByTestId('leg-distance').textContent()).not.toBe(legBefore)
+    expect(await page.getByTestId('save-state').textContent()).toBe('unsaved changes')
+
+    // A position that cannot be read shows its message in place and blocks the save.
+    await pos.fill('34 30.0N 190 00E')
+    await pos.press('Enter')
+    await page.getByTestId('cell-error').waitFor()
+    expect(await page.getByTestId('cell-error').textContent()).toMatch(/beyond 180/)
+    expect(await page.getByTestId('save').isDisabled()).toBe(true)
+    await shoot(page, 'workspace-invalid-cell')
+    await pos.press('Escape')
+    await pos.blur()
+    await expect.poll(() => page.getByTestId('cell-error').count()).toBe(0)
+
+    // Hold the limiting latitude: the ocean leg becomes geodesic – parallel – geodesic, nothing poleward of it.
+    expect(Math.max(...(await latitudes(page)))).toBeLessThan(LIMIT)
+    await page.getByTestId('limit-lat').fill(String(LIMIT))
+    await page.getByTestId('apply-limit').click()
+    await expect.poll(() => rows(page).count()).toBe(6)
+    const lats = await latitudes(page)
+    expect(Math.max(...lats)).toBeLessThanOrEqual(LIMIT + 1e-9)
+    expect(lats.filter(l => Math.abs(l - LIMIT) < 1e-6)).toHaveLength(2)
+    expect(await page.getByTestId('tool-message').textContent()).toMatch(/1 leg replaced/)
+    await shoot(page, 'workspace-limit')
+
+    // Split the first composite leg (geodesic up to the limit) every 10° of longitude into rhumb-line legs.
+    await page.getByTestId('split-leg').selectOption({ index: 2 })
+    await page.getByTestId('split-every').fill('10')
+    await page.getByTestId('split').click()
+    await expect.poll(() => rows(page).count()).toBeGreaterThan(6)
+    const split = await rows(page).count()
+    expect(Math.max(...(await latitudes(page)))).toBeLessThanOrEqual(LIMIT + 1e-9)
+    const methods = await rows(page).locator('select[data-cell="method"]').evaluateAll(els => els.map(e => (e as HTMLSelectElement).value))
+    expect(methods.slice(1, split - 3).every(m => m === 'rhumb')).toBe(true)
+    await shoot(page, 'workspace-split')
+
+    // Undo brings the split back out; redo it and save.
+    await page.getByTestId('undo').click()
+    await expect.poll(() => rows(page).count()).toBe(6)
+    await page.getByTestId('split').click()
+    await expect.poll(() => rows(page).count()).toBe(split)
+
+    await page.getByTestId('save').click()
+    await expect.poll(() => page.getByTestId('save-state').textContent()).toBe('saved')
+    await shoot(page, 'workspace-saved')
+    const api = await loginAs('planner')
+    const stored = (await api.request(`/api/plans/${planId}`)).body
+    expect(stored.waypoints).toHaveLength(split)
+    expect(Math.max(...stored.waypoints.map((w: { lat: number }) => w.lat))).toBeLessThanOrEqual(LIMIT + 1e-9)
+    expect(stored.totals.distanceNm).toBeCloseTo(await totalNm(page), 0)
+  })
+
+  it('keeps unsaved changes across a reload', async () => {
+    const page = await browser.newPage(1600, 1000)
+    await signIn(page, 'planner')
+    await page.goto(`/plans/${planId}`)
+    await page.getByTestId('plan-workspace').waitFor()
+    const name = page.getByTestId('waypoint-row').nth(1).locator('[data-cell="name"] input')
+    await name.fill('Offing, renamed')
+    await name.press('Enter')
+    await expect.poll(() => page.getByTestId('save-state').textContent()).toBe('unsaved changes')
+    await page.waitForTimeout(500)
+    await page.reload()
+    await page.getByTestId('restored-notice').waitFor()
+    expect(await name.inputValue()).toBe('Offing, renamed')
+    await shoot(page, 'workspace-restored')
+    await page.getByTestId('restored-notice').getByRole('button', { name: 'Discard them' }).click()
+    await expect.poll(() => page.getByTestId('save-state').textContent()).toBe('saved')
+  })
+
+  it('shows the draft read only to a shore user', async () => {
+    const page = await browser.newPage(1600, 1000)
+    await signIn(page, 'shore')
+    await page.goto(`/plans/${planId}`)
+    await page.getByTestId('plan-workspace').waitFor()
+    expect(await page.getByTestId('save').count()).toBe(1)
+    expect(await page.getByTestId('split').count()).toBe(0)
+    expect(await page.getByTestId('wp-position-0').locator('input').getAttribute('readonly')).not.toBeNull()
+    await shoot(page, 'workspace-shore')
+  })
+})
