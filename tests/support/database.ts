@@ -1,0 +1,38 @@
+// A scratch database of its own for a test file that must see the whole database unchanged
+// (the fuzz test) or must not disturb others: created fresh, migrated and seeded with the demo.
+import knex from 'knex'
+import { knexConfig } from '../../db/knexfile'
+
+export async function createScratchDatabase(name: string): Promise<string> {
+  const base = new URL(process.env.NUXT_DATABASE_URL!)
+  const admin = knex({ client: 'pg', connection: { ...connectionOf(base), database: 'postgres' } })
+  await admin.raw(`drop database if exists ?? with (force)`, [name])
+  await admin.raw(`create database ??`, [name])
+  await admin.destroy()
+  const url = new URL(base.href)
+  url.pathname = `/${name}`
+  const db = knex(knexConfig(url.href))
+  await db.migrate.latest()
+  await db.seed.run()
+  await db.destroy()
+  return url.href
+}
+
+function connectionOf(url: URL) {
+  return { host: url.hostname, port: Number(url.port || 5432), user: decodeURIComponent(url.username || 'postgres'), password: decodeURIComponent(url.password) || undefined }
+}
+
+/** Row count and an order-independent checksum of every table in the public schema. */
+export async function tableFingerprints(databaseUrl: string): Promise<Record<string, string>> {
+  const db = knex({ client: 'pg', connection: databaseUrl })
+  try {
+    const tables = (await db.raw(`select tablename from pg_tables where schemaname = 'public' order by 1`)).rows.map((r: any) => r.tablename as string)
+    const out: Record<string, string> = {}
+    for (const t of tables) {
+      const { rows } = await db.raw(`select count(*)::text as n, coalesce(md5(string_agg(md5(x::text), '' order by md5(x::text))), '') as sum from ?? x`, [t])
+      out[t] = `${rows[0].n}:${rows[0].sum}`
+    }
+    return out
+  }
+  finally { await db.destroy() }
+}
