@@ -1,0 +1,15 @@
+import { idParamsSchema } from '#shared/types/plan'
+import { routeExportQuerySchema } from '#shared/types/routeFile'
+
+export default defineEventHandler(async (event) => {
+  const user = await requireRole(event, ALL_ROLES)
+  const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
+  const { format } = await getValidatedQuery(event, routeExportQuerySchema.parse)
+  const file = await exportPlanRoute(user, id, format)
+  setResponseHeaders(event, {
+    'content-type': file.contentType,
+    'content-disposition': `attachment; filename="${file.fileName}"; filename*=UTF-8''${encodeURIComponent(file.fileName)}`,
+    'cache-control': 'private, no-store',
+  })
+  return file.body
+})
