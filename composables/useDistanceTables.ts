@@ -1,0 +1,49 @@
+import type { DistanceTableCreateInput, DistanceTableDetail } from '#shared/types/distanceTable'
+
+/** Writes on distance tables; each refreshes the saved list (and the open table). */
+export function useDistanceTableActions() {
+  const busy = ref(false)
+  const error = ref<any>(null)
+  async function run<T>(fn: () => Promise<T>): Promise<T | undefined> {
+    busy.value = true
+    error.value = null
+    try {
+      const result = await fn()
+      await refreshNuxtData('tables')
+      return result
+    }
+    catch (e) { error.value = e }
+    finally { busy.value = false }
+  }
+  return {
+    busy: readonly(busy),
+    error: readonly(error),
+    build: (input: DistanceTableCreateInput) => run(() => $fetch<DistanceTableDetail>('/api/tables', { method: 'POST', body: input })),
+    rebuild: (id: number) => run(() => $fetch<DistanceTableDetail>(`/api/tables/${id}/rebuild`, { method: 'POST' })),
+    remove: (id: number) => run(() => $fetch(`/api/tables/${id}`, { method: 'DELETE' })),
+  }
+}
+
+/** The open table; polled every second while it builds so the progress bar moves. */
+export function useDistanceTable(id: MaybeRefOrGetter<number | null>) {
+  const key = computed(() => `table-${toValue(id) ?? 'none'}`)
+  const result = useAsyncData(key, () => {
+    const value = toValue(id)
+    return value ? $fetch<DistanceTableDetail>(`/api/tables/${value}`) : Promise.resolve(null)
+  }, { watch: [() => toValue(id)] })
+  let timer: ReturnType<typeof setTimeout> | undefined
+  const schedule = () => {
+    clearTimeout(timer)
+    if (result.data.value?.status !== 'building') return
+    timer = setTimeout(async () => {
+      // The saved list shows the same progress, so it is refreshed with the open table.
+      await Promise.all([result.refresh(), refreshNuxtData('tables')])
+      schedule()
+    }, 1000)
+  }
+  if (import.meta.client) {
+    watch(() => result.data.value?.status, schedule, { immediate: true })
+    onScopeDispose(() => clearTimeout(timer))
+  }
+  return result
+}
