@@ -92,6 +92,10 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await Promise.all([...children].map(c => stop(c, 'SIGKILL')))
+  // Leave the demo data as other test files expect it.
+  const crewless = db('vessels').where({ imo_number: '9000003' }).select('id')
+  await db('plans').whereIn('vessel_id', crewless).delete()
+  await db('vessels').where({ imo_number: '9000003' }).delete()
   await db.destroy()
 })
 
@@ -183,6 +187,7 @@ describe('delivery', () => {
     expect(sent.last_error).toBeNull()
     await stop(second)
     await stop(fake)
+    rmSync(mailDir, { recursive: true, force: true })
   })
 
   it('never sends a row twice when two workers race for it', async () => {
