@@ -1,7 +1,12 @@
 import type { Waypoint } from '#shared/types/waypoint'
 import type { LatLon } from '#shared/types/geo'
 
-const positionName = (p: LatLon) => `${formatLatitude(p.lat, 0)} ${formatLongitude(p.lon, 0)}`
+// Intermediate waypoints are named by their position in whole minutes, as they would be written on the chart: 48°45′N 166°39′W.
+function angleName(value: number, pos: string, neg: string): string {
+  const minutes = Math.round(Math.abs(value) * 60)
+  return `${Math.floor(minutes / 60)}°${String(minutes % 60).padStart(2, '0')}′${value < 0 && minutes > 0 ? neg : pos}`
+}
+const positionName = (p: LatLon) => `${angleName(p.lat, 'N', 'S')} ${angleName(normaliseLongitude(p.lon), 'E', 'W')}`
 
 /** Track tools over the draft: each replaces the waypoint list in one undoable step. */
 export function useTrackTools() {
