@@ -169,6 +169,7 @@ export function normaliseLongitude(lon: number): number {
 
 /** Course in 0 ≤ c < 360. */
 export function normaliseCourse(deg: number): number {
+  if (deg > 0 && deg < 360) return deg
   let c = deg % 360
   if (c < 0) c += 360
   return c >= 360 || c === 0 ? 0 : c
