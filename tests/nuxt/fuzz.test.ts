@@ -30,10 +30,11 @@ interface Malformed { body?: BodyInit, contentType?: string, kind: string }
 function malformed(rand: () => number, i: number): Malformed {
   const pick = <T>(xs: T[]) => xs[Math.floor(rand() * xs.length)]!
   const value = () => pick(WEIRD_VALUES)
+  const nonString = () => pick(WEIRD_VALUES.filter(v => typeof v !== 'string' || v === '\u0000'))
   switch (i % 12) {
     case 0: return { kind: 'wrong top-level type', body: JSON.stringify(value()), contentType: 'application/json' }
     case 1: return { kind: 'missing fields', body: '{}', contentType: 'application/json' }
-    case 2: return { kind: 'wrong field types', body: JSON.stringify({ from: value(), to: value(), lat: value(), lon: value(), waypoints: value(), version: value(), name: value(), email: value(), password: value(), vesselId: value(), speedKn: value(), placeIds: value(), reserve: value(), remarks: value(), points: value() }), contentType: 'application/json' }
+    case 2: return { kind: 'wrong field types', body: JSON.stringify({ from: value(), to: value(), lat: value(), lon: value(), waypoints: value(), version: value(), name: nonString(), email: nonString(), password: nonString(), vesselId: value(), speedKn: value(), placeIds: value(), reserve: value(), remarks: nonString(), points: value(), crew: value() }), contentType: 'application/json' }
     case 3: return { kind: 'huge numbers', body: JSON.stringify({ version: 1e308, waypoints: [{ lat: 1e308, lon: -1e308 }, { lat: 91, lon: 0 }], from: { lat: 1e308, lon: 0 }, to: { lat: 0, lon: 1e308 }, speedKn: 1e308, distanceM: 1e308, course: 1e308 }), contentType: 'application/json' }
     case 4: return { kind: 'NaN and Infinity as strings', body: JSON.stringify({ from: { lat: 'NaN', lon: 'Infinity' }, to: { lat: '-Infinity', lon: 'NaN' }, version: 'NaN', speedKn: 'Infinity', waypoints: [{ lat: 'NaN', lon: 'NaN' }] }), contentType: 'application/json' }
     case 5: return { kind: 'deep nesting', body: deep(500 + Math.floor(rand() * 3000)), contentType: 'application/json' }
