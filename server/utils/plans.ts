@@ -121,6 +121,8 @@ export async function saveWaypoints(user: SessionUser, id: number, version: numb
     const plan = await findPlan(user, id, trx)
     assertEditable(plan)
     await bumpVersion(trx, plan, version, plan.status === 'returned' ? { status: 'draft' } : {})
+    // Editing a returned plan takes it back to draft: a sign-off step, so it goes in the history.
+    if (plan.status === 'returned') await recordEvent(trx, id, user, 'reopened', 'returned', 'draft')
     await writeWaypoints(trx, id, plan, waypoints)
   })
   return getPlanView(user, id)

@@ -137,6 +137,7 @@ describe('sign-off rules', () => {
     const put = await as.planner!.request(`/api/plans/${id}/waypoints`, { method: 'PUT', body: { version: view.plan.version, waypoints: WAYPOINTS.slice(0, 2) } })
     expect(put.status).toBe(200)
     expect(put.body.plan.status).toBe('draft')
+    expect(put.body.events.at(-1)).toMatchObject({ kind: 'reopened', userName: 'Tomas Verhoeven', fromStatus: 'returned', toStatus: 'draft' })
     expect((await act(as.planner!, id, 'submit')).status).toBe(200)
   })
 })
