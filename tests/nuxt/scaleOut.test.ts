@@ -1,0 +1,65 @@
+// Two app instances on different ports, one database, one session password: sessions made on one
+// work on the other, a plan goes through sign-off alternating between them, and with both outbox
+// workers running each crew brief is delivered exactly once.
+import { existsSync, readdirSync, readFileSync } from 'node:fs'
+import { join } from 'node:path'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { demoUsers, DEMO_PASSWORD, type DemoUser } from '../support/server'
+import { startInstance, type Instance } from '../support/instances'
+
+let a: Instance, b: Instance
+beforeAll(async () => {
+  [a, b] = await Promise.all([startInstance(), startInstance()])
+})
+afterAll(async () => { await Promise.all([a?.stop(), b?.stop()]) })
+
+async function signIn(base: string, who: DemoUser) {
+  const res = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: demoUsers[who], password: DEMO_PASSWORD }) })
+  expect(res.status).toBe(200)
+  return res.headers.getSetCookie().map(c => c.split(';')[0]).join('; ')
+}
+
+async function call(base: string, cookie: string, path: string, method = 'GET', body?: unknown) {
+  const res = await fetch(`${base}${path}`, { method, headers: { cookie, ...(body ? { 'content-type': 'application/json' } : {}) }, body: body ? JSON.stringify(body) : undefined })
+  return { status: res.status, body: await res.json().catch(() => null) }
+}
+
+describe('two instances behind one database', () => {
+  it('a session made on one instance works on the other, and sign-out on one ends it on both', async () => {
+    const cookie = await signIn(a.url, 'shore')
+    expect((await call(b.url, cookie, '/api/auth/me')).body.user.role).toBe('shore')
+    expect((await call(b.url, cookie, '/api/auth/logout', 'POST')).status).toBe(200)
+    expect((await call(a.url, cookie, '/api/auth/me')).status).toBe(401)
+  })
+
+  it('takes a plan through sign-off alternating between the instances, and both workers deliver its brief once', async () => {
+    const planner = await signIn(a.url, 'planner')
+    const master = await signIn(b.url, 'master')
+    const vessels = (await call(b.url, planner, '/api/vessels')).body as { id: number, name: string }[]
+    const vesselId = vessels.find(v => v.name === 'Kestrel Dawn')!.id
+    const created = await call(a.url, planner, '/api/plans', 'POST', { vesselId, title: 'Scale-out – Skaw to Gothenburg', departureUtc: '2027-02-01T08:00:00Z', speedKn: 12 })
+    expect(created.status).toBe(201)
+    const id = created.body.id
+    const saved = await call(b.url, planner, `/api/plans/${id}/waypoints`, 'PUT', { version: 1, waypoints: [{ name: 'Skaw', lat: 57.8, lon: 10.7 }, { name: 'Vinga', lat: 57.63, lon: 11.6 }] })
+    expect(saved.status).toBe(200)
+    expect((await call(a.url, planner, `/api/plans/${id}/submit`, 'POST')).status).toBe(200)
+    expect((await call(b.url, master, `/api/plans/${id}/approve`, 'POST')).status).toBe(200)
+    const view = (await call(a.url, planner, `/api/plans/${id}`)).body
+    expect(view.plan.status).toBe('approved')
+    expect(view.events.map((e: any) => e.kind)).toEqual(['created', 'submitted', 'approved'])
+
+    const brief = await call(a.url, planner, `/api/plans/${id}/brief`, 'POST')
+    expect([200, 201, 202]).toContain(brief.status)
+    const outboxId = brief.body.id ?? brief.body.message?.id
+    const mailDir = process.env.PW_MAIL_DIR!
+    const delivered = () => existsSync(mailDir)
+      ? readdirSync(mailDir).map(f => JSON.parse(readFileSync(join(mailDir, f), 'utf8'))).filter(m => m.headers?.['x-passagewright-outbox-id'] === String(outboxId))
+      : []
+    await expect.poll(() => delivered().length, { timeout: 60_000, interval: 500 }).toBe(1)
+    // Both workers have had time to pick it up again if they were going to.
+    await new Promise(r => setTimeout(r, 3000))
+    expect(delivered()).toHaveLength(1)
+    const outbox = (await call(b.url, planner, '/api/outbox')).body as any[]
+    expect(outbox.find(m => m.id === outboxId)?.state).toBe('sent')
+  })
+})
