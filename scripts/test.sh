@@ -10,12 +10,14 @@ TEST_DB="${PW_TEST_DB:-passagewright_test}"
 ensure_database "$TEST_DB" fresh
 export PW_TEST_DB="$TEST_DB"
 export NUXT_SESSION_PASSWORD="${NUXT_SESSION_PASSWORD:-passagewright-test-session-password-0123456789}"
-export NUXT_SMTP_URL="smtp://127.0.0.1:2526"
+SMTP_PORT="${PW_TEST_SMTP_PORT:-2526}"
+export NUXT_SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
 export PW_MAIL_DIR="$DATA/mail-test"
 export NUXT_TILE_CACHE_DIR="$DATA/tiles-test"
 rm -rf "$PW_MAIL_DIR"
 MAIL_PID=""
-start_mail_fake 2526 "$PW_MAIL_DIR"
+port_in_use "$SMTP_PORT" && die "port $SMTP_PORT (SMTP fake for the tests) is taken; set PW_TEST_SMTP_PORT"
+start_mail_fake "$SMTP_PORT" "$PW_MAIL_DIR"
 cleanup() {
   [ -n "$MAIL_PID" ] && kill "$MAIL_PID" 2>/dev/null || true
   [ "${PG_STARTED_HERE:-0}" = 1 ] && stop_postgres
