@@ -25,11 +25,14 @@ ensure_postgres_installed() {
   PGBIN="$(pg_bin)"
 }
 
+# npm ci when node_modules is missing or was installed from another lockfile (hash kept beside it).
 ensure_node_modules() {
-  local stamp="$ROOT/node_modules/.package-lock.json"
-  if [ ! -f "$stamp" ] || [ "$ROOT/package-lock.json" -nt "$stamp" ]; then
+  local stamp="$ROOT/node_modules/.passagewright-lock" want
+  want="$(sha256sum "$ROOT/package-lock.json" | cut -d' ' -f1)"
+  if [ ! -f "$stamp" ] || [ "$(cat "$stamp")" != "$want" ]; then
     log "installing npm packages (npm ci)"
     (cd "$ROOT" && npm ci --no-audit --no-fund)
+    echo "$want" > "$stamp"
   fi
 }
 
