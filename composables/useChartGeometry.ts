@@ -2,6 +2,7 @@
 // Longitudes are unwrapped along the whole route so a passage across 180° is one continuous line
 // (Leaflet then draws it beyond ±180°, on the repeated world copy of the tiles).
 import type { LatLon, LegMethod } from '#shared/types/geo'
+import type { LandCheckLeg } from '#shared/types/landCheck'
 import { densifyLeg, unwrapLongitudes } from '#shared/utils/track'
 import { geodesicDirect, geodesicInverse, geodesicVertex } from '#shared/utils/geodesic'
 import { greatEllipseDensify } from '#shared/utils/greatEllipse'
@@ -158,6 +159,20 @@ function limitLine(track: LatLon[], bounds: ChartGeometry['bounds'], limitLat?: 
   const lat = Math.abs(bounds.north) >= Math.abs(bounds.south) ? Math.abs(limitLat) : -Math.abs(limitLat)
   const margin = Math.max(10, (bounds.east - bounds.west) * 0.15)
   return [{ lat, lon: bounds.west - margin }, { lat, lon: bounds.east + margin }]
+}
+
+export interface ChartLandMark extends LatLon { legIndex: number, kind: 'crossing' | 'near', closestNm: number }
+
+/** Land check findings at the world copy of their leg (crossing: first land point; near: closest coast point). */
+export function landMarks(g: ChartGeometry, legs: readonly LandCheckLeg[] | undefined): ChartLandMark[] {
+  const out: ChartLandMark[] = []
+  for (const l of legs ?? []) {
+    const ref = g.waypoints[l.index]?.lon
+    const p = l.crossesLand ? l.firstLandPoint : l.withinClearance ? l.closestCoastPoint : null
+    if (ref == null || !p) continue
+    out.push({ legIndex: l.index, kind: l.crossesLand ? 'crossing' : 'near', closestNm: l.closestApproachNm, lat: p.lat, lon: ref + signedDiff(p.lon, ref) })
+  }
+  return out
 }
 
 /** Composable form for components: one builder per chart instance. */

@@ -4,7 +4,7 @@
 import type * as Leaflet from 'leaflet'
 import type { LatLon } from '#shared/types/geo'
 import { formatLatitude } from '#shared/utils/position'
-import type { ChartGeometry } from './useChartGeometry'
+import type { ChartGeometry, ChartLandMark } from './useChartGeometry'
 
 /** Passagewright's chart colours (our own palette: teal ink, brass, violet, red-brown). */
 export const CHART_COLOURS = {
@@ -38,6 +38,7 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
   // Above the track: the great ellipse runs within a few miles of a geodesic and would hide under it.
   const ellipse = L.polyline([], { color: C.ellipse, weight: 3, dashArray: '0.5 6', lineCap: 'round', interactive: false, className: 'pw-great-ellipse' }).addTo(map)
   const vertexLayer = L.layerGroup().addTo(map)
+  const landLayer = L.layerGroup().addTo(map)
   const markers: { marker: Leaflet.Marker, look: string }[] = []
   let dragging = -1
 
@@ -73,9 +74,19 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
     vertexLayer.clearLayers()
     for (const v of g.vertices) {
       const label = `Vertex of leg ${v.legIndex + 1}: ${formatLatitude(v.lat, 1)}`
-      L.marker([v.lat, v.lon], { interactive: true, keyboard: false, title: label, icon: L.divIcon({ className: 'pw-vertex-marker', iconSize: [12, 12], iconAnchor: [6, 6] }) })
+      L.marker([v.lat, v.lon], { keyboard: false, zIndexOffset: -500, title: label, icon: L.divIcon({ className: 'pw-vertex-marker', iconSize: [12, 12], iconAnchor: [6, 6] }) })
         .bindTooltip(label, { direction: 'top', offset: [0, -6] })
         .addTo(vertexLayer)
+    }
+  }
+
+  function updateLand(marks: ChartLandMark[]) {
+    landLayer.clearLayers()
+    for (const m of marks) {
+      const label = m.kind === 'crossing' ? `Leg ${m.legIndex + 1} crosses land here` : `Leg ${m.legIndex + 1} passes ${m.closestNm.toFixed(1)} nm from this coast`
+      L.marker([m.lat, m.lon], { keyboard: false, zIndexOffset: -1000, title: label, icon: L.divIcon({ className: `pw-land-mark pw-land-mark--${m.kind}`, html: m.kind === 'crossing' ? '✕' : '!', iconSize: [16, 16], iconAnchor: [8, 8] }) })
+        .bindTooltip(label, { direction: 'top', offset: [0, -8] })
+        .addTo(landLayer)
     }
   }
 
@@ -96,5 +107,5 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
     map.fitBounds([[south, west], [north, east]], { padding: [28, 28], maxZoom: 7 })
   }
 
-  return { update, fit }
+  return { update, updateLand, fit }
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { corridorRing, createChartGeometry } from '../../composables/useChartGeometry'
+import { corridorRing, createChartGeometry, landMarks } from '../../composables/useChartGeometry'
 import { densifyLeg } from '../../shared/utils/track'
 import { geodesicInverse } from '../../shared/utils/geodesic'
 import { rhumbInverse } from '../../shared/utils/rhumb'
@@ -90,5 +90,21 @@ describe('chart geometry', () => {
       // Port side first (course − 90°), starboard back (course + 90°).
       expect(Math.sign(angleDiff(azi1!, courses[n]!))).toBe(n % 2 === 0 ? -1 : 1)
     })
+  })
+})
+
+describe('land check marks', () => {
+  it('sit on the world copy of their leg and only for flagged legs', () => {
+    const g = createChartGeometry()(pacific)
+    const coast = { lat: 48.4, lon: -124.7 }
+    const legs = [
+      { index: 0, crossesLand: false, firstLandPoint: null, closestApproachNm: 30, closestCoastPoint: coast, withinClearance: false },
+      { index: 1, crossesLand: false, firstLandPoint: null, closestApproachNm: 3.2, closestCoastPoint: coast, withinClearance: true },
+      { index: 2, crossesLand: true, firstLandPoint: { lat: 48.3, lon: -123.9 }, closestApproachNm: 0, closestCoastPoint: coast, withinClearance: true },
+    ]
+    const marks = landMarks(g, legs)
+    expect(marks.map(m => [m.legIndex, m.kind])).toEqual([[1, 'near'], [2, 'crossing']])
+    expect(marks[0]!.lon).toBeCloseTo(360 - 124.7, 9)
+    expect(marks[1]!.lon).toBeCloseTo(360 - 123.9, 9)
   })
 })
