@@ -1,0 +1,38 @@
+import { describe, expect, it } from 'vitest'
+import { startServer } from '../support/server'
+import { shoot, signIn, useBrowser } from '../support/browser'
+
+await startServer()
+const browser = useBrowser()
+
+describe('shore desk pages', () => {
+  it('the vessel page plots the fuel points and the fitted curve', async () => {
+    const page = await browser.newPage()
+    await signIn(page, 'shore')
+    await page.goto('/vessels')
+    await page.getByRole('link', { name: 'Kestrel Dawn' }).click()
+    await page.waitForURL(/\/vessels\/\d+/)
+    const plot = page.getByTestId('fuel-plot')
+    await plot.waitFor()
+    expect(await plot.locator('circle[r="5"]').count()).toBe(6)
+    expect(await page.getByTestId('fuel-curve').getAttribute('d')).toMatch(/^M[\d.]+,[\d.]+( L[\d.]+,[\d.]+){10,}/)
+    expect(await page.getByTestId('fuel-fit').textContent()).toMatch(/t\/day = [\d.]+ · V\^\d\.\d\d.*k = \d\.\d\d, r² = 0\.9\d\d/)
+    expect(await plot.textContent()).toContain('Speed through the water (kn)')
+    await shoot(page, 'vessel-fuel')
+  })
+
+  it('the place library lists, searches and previews a CSV import', async () => {
+    const page = await browser.newPage()
+    await signIn(page, 'shore')
+    await page.goto('/places')
+    const table = page.getByTestId('place-table')
+    await table.getByText('Yokohama').waitFor()
+    await page.getByLabel('Search places').fill('pilot')
+    await expect.poll(() => table.locator('tbody tr').count()).toBeLessThan(6)
+    await page.getByLabel('Search places').fill('')
+    await page.getByLabel('CSV text').fill('name,kind,latitude,longitude\nCape Flattery offing,ocean_position,48 23.0N,124 50.0W\nBroken,port,95N,10E')
+    await page.getByRole('button', { name: 'Preview' }).click()
+    await page.getByText(/line 3: lat:/).waitFor()
+    await shoot(page, 'places')
+  })
+})
