@@ -2,7 +2,7 @@
 // tests/support/accessRules.ts: a route file without a rule fails the first test.
 import { beforeAll, describe, expect, it } from 'vitest'
 import type { Role } from '#shared/types/auth'
-import { ALL, RULES } from '../support/accessRules'
+import { ALL, RULES, VALID_BODIES } from '../support/accessRules'
 import { client, loginAs, startServer, type Api } from '../support/server'
 import { listApiRoutes, routePath, type ApiRoute } from '../support/apiRoutes'
 
@@ -30,7 +30,7 @@ describe('access control, every route × every caller', () => {
   })
 
   const call = (api: Api, route: ApiRoute, id: number) =>
-    api.request(routePath(route, id).replace('/api/timezone', '/api/timezone?lat=1&lon=1'), { method: route.method, ...(route.method === 'GET' || route.method === 'DELETE' ? {} : { body: {} }) })
+    api.request(routePath(route, id).replace('/api/timezone', '/api/timezone?lat=1&lon=1'), { method: route.method, ...(route.method === 'GET' || route.method === 'DELETE' ? {} : { body: VALID_BODIES[route.key] ?? {} }) })
 
   it.each(routes.filter(r => RULES[r.key]?.roles !== 'open').map(r => [r.key, r] as const))('%s: anonymous 401, wrong role 403, right role passes, other company 404', async (_key, route) => {
     const rule = RULES[route.key]!

@@ -57,3 +57,15 @@ export const RULES: Record<string, { roles: Role[] | 'open', record?: 'plan' | '
 
 /** Routes that act on the record without reading a body; the fuzz test leaves them alone. */
 export const BODYLESS = new Set(['POST /api/auth/logout', 'POST /api/plans/:id/submit', 'POST /api/plans/:id/approve', 'POST /api/plans/:id/revise', 'POST /api/plans/:id/brief', 'POST /api/tables/:id/rebuild'])
+
+/** A well-formed body for routes on a record, so the scope check (404) is reached past validation. */
+export const VALID_BODIES: Record<string, unknown> = {
+  'PUT /api/plans/:id': { version: 1, title: 'Scope probe', departureUtc: '2027-01-01T00:00:00Z', speedKn: 12 },
+  'PUT /api/plans/:id/waypoints': { version: 1, waypoints: [{ lat: 10, lon: 10 }, { lat: 11, lon: 11 }] },
+  'POST /api/plans/:id/remarks': { remarks: 'Scope probe' },
+  'POST /api/plans/:id/return': { remarks: 'Scope probe' },
+  'PUT /api/places/:id': { name: 'Scope probe', kind: 'port', lat: 1, lon: 1 },
+  'PUT /api/vessels/:id': { name: 'Scope probe', imoNumber: '9074729', callSign: 'ABC1', serviceSpeedKn: 12, masterUserId: null },
+  'PUT /api/vessels/:id/crew': { crew: [{ name: 'Scope probe', rank: 'Cadet', email: 'probe@example.com' }] },
+  'PUT /api/vessels/:id/fuel': { points: [{ speedKn: 10, tonnesPerDay: 20 }, { speedKn: 12, tonnesPerDay: 30 }] },
+}
