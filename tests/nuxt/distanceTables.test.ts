@@ -13,7 +13,7 @@ function geodSolveNm(a: { lat: number, lon: number }, b: { lat: number, lon: num
   return Number(out.trim().split(/\s+/)[2]) / 1852
 }
 
-const pair = (i: number, j: number, n: number) => (i < j ? i * n - (i * (i + 1)) / 2 + (j - i - 1) : pair(j, i, n))
+const pair = (i: number, j: number, n: number): number => (i < j ? i * n - (i * (i + 1)) / 2 + (j - i - 1) : pair(j, i, n))
 
 describe('distance tables', () => {
   let shore: Api
