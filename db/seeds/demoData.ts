@@ -71,6 +71,7 @@ export const demoPlans: DemoPlan[] = [
       ['Dover Strait SW lane', 50.9500, 1.3000, 'rhumb'],
       ['Off Casquets', 49.9000, -2.6000, 'rhumb'],
       ['Bishop Rock offing', 49.7000, -6.7000, 'rhumb'],
+      ['South of the Grand Banks', 44.0000, -50.0000, 'geodesic'],
       ['Nantucket shoals offing', 40.4000, -69.0000, 'geodesic'],
       ['Ambrose pilot station', 40.4580, -73.8330, 'rhumb'],
     ],
