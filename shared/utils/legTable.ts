@@ -51,13 +51,19 @@ function legFor(i: number, a: LegTableWaypoint, b: LegTableWaypoint, speedKn: nu
   const g = method === 'geodesic' ? geodesicInverse(a, b) : null
   const distanceNm = g ? g.distanceNm : rh.distanceNm
   const hours = distanceNm / speedKn
-  const common: LegCommon = {
-    index: i, from: { lat: a.lat, lon: a.lon }, to: { lat: b.lat, lon: b.lon }, fromName: a.name ?? '', toName: b.name ?? '',
+  // One literal, then the method's course fields: object spread here made every leg a slow dictionary object.
+  const leg = {
+    index: i, method, from: { lat: a.lat, lon: a.lon }, to: { lat: b.lat, lon: b.lon }, fromName: a.name ?? '', toName: b.name ?? '',
     distanceNm, rhumbCourse: rh.course, rhumbDistanceNm: rh.distanceNm, savingNm: g ? rh.distanceNm - g.distanceNm : 0,
     speedKn, hours, etaUtc: new Date(etaMs + hours * 3_600_000).toISOString(), cumulativeNm: cumNm + distanceNm,
-    zoneDescription: zoneDescription(b.lon), xteNm: b.xteNm ?? null, courseChange: null, wheelOverNm: null,
+    zoneDescription: zoneDescription(b.lon), xteNm: b.xteNm ?? null, courseChange: null as number | null, wheelOverNm: null as number | null,
+  } as PlanLeg
+  if (leg.method === 'geodesic') {
+    leg.initialCourse = g!.initialCourse
+    leg.finalCourse = g!.finalCourse
   }
-  return g ? { ...common, method: 'geodesic', initialCourse: g.initialCourse, finalCourse: g.finalCourse } : { ...common, method: 'rhumb', course: rh.course }
+  else leg.course = rh.course
+  return leg
 }
 
 /** Leg table for a plan: every leg's course(s), distance, time and ETA, with totals and the turns between legs. */
