@@ -124,4 +124,60 @@ describe('plan workspace', () => {
     expect(await page.getByTestId('wp-position-0').locator('input').getAttribute('readonly')).not.toBeNull()
     await shoot(page, 'workspace-shore')
   })
+
+  it('keeps the draft on a conflict, shows what changed, and overwrites deliberately', async () => {
+    const page = await browser.newPage(1600, 1000)
+    await signIn(page, 'planner')
+    await page.goto(`/plans/${planId}`)
+    await page.getByTestId('plan-workspace').waitFor()
+    const mine = await rows(page).count()
+
+    // Someone else saves a shorter list meanwhile.
+    const api = await loginAs('master')
+    const theirs = (await api.request(`/api/plans/${planId}`)).body
+    const changed = await api.request(`/api/plans/${planId}/waypoints`, { method: 'PUT', body: { version: theirs.plan.version, waypoints: [theirs.waypoints[0], theirs.waypoints.at(-1)] } })
+    expect(changed.status).toBe(200)
+
+    await page.getByTestId('add-waypoint').click()
+    await expect.poll(() => rows(page).count()).toBe(mine + 1)
+    await page.getByTestId('save').click()
+    await page.getByTestId('conflict').waitFor()
+    expect(await page.getByTestId('save-state').textContent()).toBe('conflict')
+    const text = await page.getByTestId('conflict').textContent()
+    expect(text).toContain(`version ${theirs.plan.version + 1}`)
+    expect(text).toContain(`Waypoints: 2 on the server, ${mine + 1} in your draft.`)
+    expect(await rows(page).count()).toBe(mine + 1)
+    await shoot(page, 'workspace-conflict')
+
+    await page.getByTestId('overwrite-mine').click()
+    await expect.poll(() => page.getByTestId('save-state').textContent()).toBe('saved')
+    expect((await api.request(`/api/plans/${planId}`)).body.waypoints).toHaveLength(mine + 1)
+  })
+
+  it('creates a plan from the header form, starting with the departure and arrival places', async () => {
+    const page = await browser.newPage(1600, 1000)
+    await signIn(page, 'planner')
+    await page.goto('/plans/new')
+    await page.getByTestId('new-plan-form').waitFor()
+    await page.getByRole('button', { name: 'Create plan' }).click()
+    await page.getByText('title needs at least 3 characters').waitFor()
+    await page.getByLabel('Title').fill('Cape Town – Fremantle, trial')
+    await page.getByLabel('Departure (UTC)').fill('2027-01-05T08:00')
+    await page.getByLabel('Limiting latitude (°, optional)').fill('40')
+    await page.getByLabel('Departure place', { exact: true }).selectOption({ label: 'Cape Town (ZACPT)' })
+    await page.getByLabel('Arrival place', { exact: true }).selectOption({ label: 'Fremantle (AUFRE)' })
+    await shoot(page, 'workspace-new')
+    await page.getByRole('button', { name: 'Create plan' }).click()
+    await page.waitForURL(/\/plans\/\d+$/)
+    await page.getByTestId('plan-workspace').waitFor()
+    expect(await rows(page).count()).toBe(2)
+    expect(await page.getByLabel('Title').inputValue()).toBe('Cape Town – Fremantle, trial')
+    expect(await page.getByTestId('arrival-local').textContent()).toContain('Australia/Perth')
+
+    // Hold 40°S on the new plan: the track bends to the parallel and every waypoint stays north of it.
+    await page.getByTestId('apply-limit').click()
+    await expect.poll(() => rows(page).count()).toBe(4)
+    expect(Math.min(...(await latitudes(page)))).toBeGreaterThanOrEqual(-40 - 1e-9)
+    await shoot(page, 'workspace-new-held')
+  })
 })
