@@ -30,7 +30,7 @@ function angleSchema(kind: 'latitude' | 'longitude') {
       return kind === 'longitude' ? normaliseLongitude(deg) : deg
     }
     catch (e) {
-      ctx.addIssue({ code: 'custom', message: (e as Error).message })
+      ctx.addIssue({ code: 'custom', message: (e as Error).message.replace(/^(Latitude|Longitude): /, '') })
       return z.NEVER
     }
   })
