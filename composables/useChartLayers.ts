@@ -39,7 +39,8 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
   const ellipse = L.polyline([], { color: C.ellipse, weight: 3, dashArray: '0.5 6', lineCap: 'round', interactive: false, className: 'pw-great-ellipse' }).addTo(map)
   const vertexLayer = L.layerGroup().addTo(map)
   const landLayer = L.layerGroup().addTo(map)
-  const markers: { marker: Leaflet.Marker, look: string }[] = []
+  const markers: { marker: Leaflet.Marker, look: string, at: string }[] = []
+  let vertexMarkers = new Map<string, Leaflet.Marker>()
   let dragging = -1
 
   function makeMarker(i: number) {
@@ -49,7 +50,7 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
     marker.on('drag', () => on.drag(i, at()))
     marker.on('dragend', () => { dragging = -1; on.dragEnd(i, at()) })
     marker.on('click', () => on.select(i))
-    return { marker: marker.addTo(map), look: '' }
+    return { marker: marker.addTo(map), look: '', at: '' }
   }
 
   function updateMarkers(points: LatLon[], state: ChartMarkerState) {
@@ -57,7 +58,9 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
     while (markers.length < points.length) markers.push(makeMarker(markers.length))
     points.forEach((p, i) => {
       const m = markers[i]!
-      if (i !== dragging) m.marker.setLatLng([p.lat, p.lon])
+      // Only markers that moved touch the DOM: a 500-waypoint plan redraws within a frame.
+      const at = `${p.lat},${p.lon}`
+      if (i !== dragging && m.at !== at) { m.marker.setLatLng([p.lat, p.lon]); m.at = at }
       const look = `${state.selected === i}|${state.names[i] ?? ''}`
       if (m.look !== look && i !== dragging) {
         const cls = `pw-waypoint-marker${state.selected === i ? ' pw-waypoint-marker--selected' : ''}`
@@ -66,21 +69,26 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
         m.marker.getElement()?.setAttribute('data-index', String(i))
         m.look = look
       }
-      if (m.marker.dragging) (state.editable ? m.marker.dragging.enable() : m.marker.dragging.disable())
+      if (m.marker.dragging && m.marker.dragging.enabled() !== state.editable) (state.editable ? m.marker.dragging.enable() : m.marker.dragging.disable())
     })
   }
 
+  // Vertices are keyed by leg and position: unchanged legs keep their marker.
   function updateVertices(g: ChartGeometry) {
-    vertexLayer.clearLayers()
+    const next = new Map<string, Leaflet.Marker>()
     for (const v of g.vertices) {
+      const key = `${v.legIndex}|${v.lat}|${v.lon}`
       const label = `Vertex of leg ${v.legIndex + 1}: ${formatLatitude(v.lat, 1)}`
-      L.marker([v.lat, v.lon], { keyboard: false, zIndexOffset: -500, title: label, icon: L.divIcon({ className: 'pw-vertex-marker', iconSize: [12, 12], iconAnchor: [6, 6] }) })
+      next.set(key, vertexMarkers.get(key) ?? L.marker([v.lat, v.lon], { keyboard: false, zIndexOffset: -500, title: label, icon: L.divIcon({ className: 'pw-vertex-marker', iconSize: [12, 12], iconAnchor: [6, 6] }) })
         .bindTooltip(label, { direction: 'top', offset: [0, -6] })
-        .addTo(vertexLayer)
+        .addTo(vertexLayer))
     }
+    for (const [key, m] of vertexMarkers) if (!next.has(key)) vertexLayer.removeLayer(m)
+    vertexMarkers = next
   }
 
   function updateLand(marks: ChartLandMark[]) {
+    if (!marks.length && !landLayer.getLayers().length) return
     landLayer.clearLayers()
     for (const m of marks) {
       const label = m.kind === 'crossing' ? `Leg ${m.legIndex + 1} crosses land here` : `Leg ${m.legIndex + 1} passes ${m.closestNm.toFixed(1)} nm from this coast`
