@@ -4,6 +4,7 @@ import type { LatLon, LegMethod } from '../types/geo'
 import { geodesicInverse } from './geodesic'
 import { rhumbInverse } from './rhumb'
 import { courseChangeDeg, wheelOverNm, zoneDescription } from './manoeuvre'
+import { isoUtc } from './engine/isoTime'
 
 /** A waypoint as the leg table reads it; method, speed and turn radius describe the leg arriving at it. */
 export interface LegTableWaypoint extends LatLon {
@@ -55,7 +56,7 @@ function legFor(i: number, a: LegTableWaypoint, b: LegTableWaypoint, speedKn: nu
   const leg = {
     index: i, method, from: { lat: a.lat, lon: a.lon }, to: { lat: b.lat, lon: b.lon }, fromName: a.name ?? '', toName: b.name ?? '',
     distanceNm, rhumbCourse: rh.course, rhumbDistanceNm: rh.distanceNm, savingNm: g ? rh.distanceNm - g.distanceNm : 0,
-    speedKn, hours, etaUtc: new Date(etaMs + hours * 3_600_000).toISOString(), cumulativeNm: cumNm + distanceNm,
+    speedKn, hours, etaUtc: isoUtc(etaMs + hours * 3_600_000), cumulativeNm: cumNm + distanceNm,
     zoneDescription: zoneDescription(b.lon), xteNm: b.xteNm ?? null, courseChange: null as number | null, wheelOverNm: null as number | null,
   } as PlanLeg
   if (leg.method === 'geodesic') {
