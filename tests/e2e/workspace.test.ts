@@ -20,6 +20,8 @@ beforeAll(async () => {
   const waypoints = seed.waypoints.map(([name, lat, lon, method]) => ({ name, lat, lon, method }))
   const res = await api.request(`/api/plans/${planId}/waypoints`, { method: 'PUT', body: { version: plan.version, waypoints } })
   expect(res.status).toBe(200)
+  const header = { version: plan.version + 1, title: TITLE, departureUtc: seed.departureUtc, speedKn: seed.speedKn, limitLat: seed.limitLat, departurePlaceId: plan.departurePlaceId, arrivalPlaceId: plan.arrivalPlaceId }
+  expect((await api.request(`/api/plans/${planId}`, { method: 'PUT', body: header })).status).toBe(200)
 })
 
 const rows = (page: Page) => page.getByTestId('waypoint-row')
@@ -179,5 +181,46 @@ describe('plan workspace', () => {
     await expect.poll(() => rows(page).count()).toBe(4)
     expect(Math.min(...(await latitudes(page)))).toBeGreaterThanOrEqual(-40 - 1e-9)
     await shoot(page, 'workspace-new-held')
+  })
+
+  it('reorders with the keyboard, inserts from the place library and checks the track against land', async () => {
+    const page = await browser.newPage(1600, 1000)
+    await signIn(page, 'planner')
+    await page.goto(`/plans/${planId}`)
+    await page.getByTestId('plan-workspace').waitFor()
+    const names = () => rows(page).locator('[data-cell="name"] input').evaluateAll(els => els.map(e => (e as HTMLInputElement).value))
+    const start = await names()
+
+    // Alt+↓ moves the row and keeps the cursor in it; Alt+↑ moves it back.
+    const second = rows(page).nth(1).locator('[data-cell="name"] input')
+    await second.focus()
+    await page.keyboard.press('Alt+ArrowDown')
+    await expect.poll(names).toEqual([start[0], start[2], start[1], ...start.slice(3)])
+    expect(await page.evaluate(() => document.activeElement?.closest('[data-row]')?.getAttribute('data-row'))).toBe('2')
+    await page.keyboard.press('Alt+ArrowUp')
+    await expect.poll(names).toEqual(start)
+
+    // Insert Seattle from the library after the selected (first) row, then undo it.
+    await rows(page).nth(0).locator('[data-cell="name"] input').focus()
+    await page.getByLabel('Insert a place from the library').selectOption({ label: 'Seattle (USSEA)' })
+    await expect.poll(names).toEqual([start[0], 'Seattle', ...start.slice(1)])
+    await page.getByTestId('undo').click()
+    await expect.poll(names).toEqual(start)
+
+    await page.getByTestId('run-land-check').click()
+    const check = page.getByTestId('land-check')
+    await check.getByText('Coastline data is coarse').waitFor()
+    expect(await check.locator('li').count()).toBe(start.length - 1)
+    await shoot(page, 'workspace-land-check')
+
+    // A header change (speed) retimes the legs and is saved with the plan.
+    const eta = await page.getByTestId('total-eta').textContent()
+    await page.getByLabel('Speed (kn)', { exact: true }).fill('16')
+    await page.getByLabel('Speed (kn)', { exact: true }).press('Enter')
+    await expect.poll(() => page.getByTestId('total-eta').textContent()).not.toBe(eta)
+    await page.getByTestId('save').click()
+    await expect.poll(() => page.getByTestId('save-state').textContent()).toBe('saved')
+    const api = await loginAs('planner')
+    expect((await api.request(`/api/plans/${planId}`)).body.plan.speedKn).toBe(16)
   })
 })
