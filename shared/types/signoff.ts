@@ -3,6 +3,8 @@ import { REMARKS_MAX } from '../utils/signoffRules'
 
 const remarksField = z.string({ error: 'remarks are required' }).trim()
   .min(1, 'remarks are required').max(REMARKS_MAX, `remarks are at most ${REMARKS_MAX} characters`)
+  // PostgreSQL text cannot hold NUL, and no other control character belongs in a remark (tabs and line breaks do).
+  .refine(s => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/.test(s), 'remarks may not contain control characters')
 
 /** Optional `version`: when the caller sends the version it looked at, a plan changed since then is refused (409). */
 const versionField = z.number({ error: 'version must be a number' }).int('version must be a whole number').positive('version must be positive').optional()

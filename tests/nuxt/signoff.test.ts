@@ -102,6 +102,8 @@ describe('sign-off rules', () => {
     expect((await as.master!.request(url, { method: 'POST', body: {} })).status).toBe(400)
     expect((await as.master!.request(url, { method: 'POST', body: { remarks: '   ' } })).body.message).toMatch(/^remarks/)
     expect((await as.master!.request(url, { method: 'POST', body: { remarks: 'x'.repeat(2001) } })).status).toBe(400)
+    expect((await as.master!.request(url, { method: 'POST', body: { remarks: 'nul \u0000 inside' } })).status).toBe(400)
+    expect((await as.master!.request(url, { method: 'POST', body: { remarks: 'bell \u0007 inside' } })).body.message).toMatch(/^remarks: .*control characters/)
     expect((await as.master!.request(url, { method: 'POST', body: { remarks: 'x'.repeat(2000) } })).status).toBe(200)
   })
 
