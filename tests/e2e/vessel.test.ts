@@ -37,4 +37,16 @@ describe('shore desk pages', () => {
     expect(await page.getByRole('button', { name: /^Import \d+ places/ }).isDisabled()).toBe(true)
     await shoot(page, 'places')
   })
+
+  it('an admin lists the company\'s users and sees the password rule', async () => {
+    const page = await browser.newPage()
+    await signIn(page, 'admin')
+    await page.goto('/admin/users')
+    await page.getByTestId('user-table').getByText('shore@kestrel-bight.example').waitFor()
+    expect(await page.getByTestId('user-table').getByText('larkspur-reach').count()).toBe(0)
+    await page.getByLabel('Initial password').fill('short')
+    await page.getByRole('button', { name: 'Add user' }).click()
+    await page.getByText('password must be at least 10 characters').waitFor()
+    await shoot(page, 'admin-users')
+  })
 })
