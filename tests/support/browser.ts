@@ -24,8 +24,8 @@ export function useBrowser() {
   }
 }
 
-export async function signIn(page: Page, who: DemoUser) {
-  await page.goto('/login')
+export async function signIn(page: Page, who: DemoUser, base = '') {
+  await page.goto(`${base}/login`)
   await page.getByLabel('E-mail').fill(demoUsers[who])
   await page.getByLabel('Password').fill(DEMO_PASSWORD)
   await page.getByRole('button', { name: 'Sign in' }).click()

@@ -1,0 +1,62 @@
+// From the planner's desk to the crew's inboxes, in the browser, with the work alternating between
+// two app instances on one database (scale-out): the planner submits on one, the master approves
+// on the other, the brief is sent and the outbox shows it delivered once.
+import { existsSync, readdirSync, readFileSync } from 'node:fs'
+import { join } from 'node:path'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { loginAs, startServer, url } from '../support/server'
+import { startInstance, type Instance } from '../support/instances'
+import { shoot, signIn, useBrowser } from '../support/browser'
+
+await startServer()
+const browser = useBrowser()
+let second: Instance
+beforeAll(async () => { second = await startInstance() })
+afterAll(async () => { await second?.stop() })
+
+function deliveredFor(outboxId: number) {
+  const dir = process.env.PW_MAIL_DIR!
+  if (!existsSync(dir)) return []
+  return readdirSync(dir).map(f => JSON.parse(readFileSync(join(dir, f), 'utf8')))
+    .filter(m => m.headers?.['x-passagewright-outbox-id'] === String(outboxId))
+}
+
+describe('sign-off and crew brief across two instances', () => {
+  it('planner submits on one instance, master approves on the other, the brief goes out once', async () => {
+    const api = await loginAs('planner')
+    const vessels = (await api.request('/api/vessels')).body as { id: number, name: string }[]
+    const vesselId = vessels.find(v => v.name === 'Kestrel Dawn')!.id
+    const { id } = (await api.request('/api/plans', { method: 'POST', body: { vesselId, title: 'Sign-off run – Elbe to Skaw', departureUtc: '2027-02-10T06:00:00Z', speedKn: 13 } })).body
+    await api.request(`/api/plans/${id}/waypoints`, { method: 'PUT', body: { version: 1, waypoints: [{ name: 'Elbe 1', lat: 54.0, lon: 8.1 }, { name: 'Skaw', lat: 57.8, lon: 10.7, method: 'geodesic' }] } })
+
+    const planner = await browser.newPage()
+    await signIn(planner, 'planner')
+    await planner.goto(`/plans/${id}`)
+    await planner.getByRole('button', { name: 'Submit for sign-off' }).click()
+    await planner.getByTestId('signoff-panel').locator('[data-status="submitted"]').waitFor()
+    expect(await planner.getByRole('button', { name: 'Approve' }).count()).toBe(0)
+
+    const master = await browser.newPage()
+    await master.goto(`${second.url}/login`)
+    await signIn(master, 'master', second.url)
+    await master.goto(`${second.url}/plans/${id}`)
+    await master.getByRole('button', { name: 'Approve' }).click()
+    await master.getByTestId('approval-line').getByText('Approved by').waitFor()
+    await shoot(master, 'signoff-approved')
+
+    // The planner's session, made on the first instance, works on the second.
+    await planner.goto(`${second.url}/plans/${id}`)
+    await planner.getByTestId('approval-line').getByText('Approved by').waitFor()
+    await planner.getByRole('button', { name: 'Send crew brief' }).click()
+    await planner.getByRole('status').waitFor()
+
+    const outbox = (await api.request('/api/outbox')).body as { id: number, planId: number }[]
+    const message = outbox.find(m => m.planId === id)!
+    await expect.poll(() => deliveredFor(message.id).length, { timeout: 60_000, interval: 500 }).toBe(1)
+    await planner.goto(`${url('')}/outbox`)
+    await planner.getByTestId('outbox-table').locator('[data-state="sent"]').first().waitFor()
+    await shoot(planner, 'outbox-sent')
+    await new Promise(r => setTimeout(r, 2000))
+    expect(deliveredFor(message.id)).toHaveLength(1)
+  })
+})
