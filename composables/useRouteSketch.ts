@@ -20,9 +20,11 @@ function unprojectLat(y: number, z: number) {
   return (Math.atan(Math.sinh(Math.PI - (2 * Math.PI * y) / (TILE * 2 ** z))) * 180) / Math.PI
 }
 
-/** Degrees between labels: on the tiles' own graticule lines (server/utils/tiles.ts graticuleStep), majors only when dense. */
-function labelStep(z: number) {
-  return z <= 1 ? 30 : z <= 3 ? 10 : z <= 7 ? 5 : 1
+/** Degrees between labels: on the tiles' own graticule lines (server/utils/tiles.ts graticuleStep), at least ~60 output px apart. */
+function labelStep(z: number, scale: number) {
+  const lineStep = z <= 1 ? 30 : z <= 3 ? 10 : z <= 5 ? 5 : 1
+  const pxPerDeg = ((TILE * 2 ** z) / 360) * scale
+  return [1, 5, 10, 20, 30, 60, 90].find(s => s % lineStep === 0 && s * pxPerDeg >= 60) ?? 90
 }
 
 function labelFor(value: number, axis: 'lat' | 'lon') {
@@ -40,11 +42,15 @@ export function buildRouteSketch(waypoints: readonly (LatLon & { method?: LegMet
   const box0 = track.map(p => project(p, 0))
   const [minX, maxX] = [Math.min(...box0.map(p => p.x)), Math.max(...box0.map(p => p.x))]
   const [minY, maxY] = [Math.min(...box0.map(p => p.y)), Math.max(...box0.map(p => p.y))]
-  const fit = Math.min(o.width / Math.max(maxX - minX, 0.05), o.height / Math.max(maxY - minY, 0.05)) / 1.25
-  const z = Math.max(1, Math.min(o.maxZoom ?? 8, Math.floor(Math.log2(fit))))
+  // Output pixels per zoom-0 pixel so the track fills the picture with a margin; the nearest tile
+  // zoom is then scaled by at most √2 either way.
+  const fit = Math.min(o.width / Math.max(maxX - minX, 0.02), o.height / Math.max(maxY - minY, 0.02)) / 1.2
+  const z = Math.max(1, Math.min(o.maxZoom ?? 8, Math.round(Math.log2(fit))))
   const k = 2 ** z
+  const scale = Math.min(fit, k * 1.42) / k
+  const [w, h] = [o.width / scale, Math.min(o.height / scale, TILE * k)]
   const cx = ((minX + maxX) / 2) * k, cy = ((minY + maxY) / 2) * k
-  const vb = { x: cx - o.width / 2, y: Math.max(0, Math.min(TILE * k - o.height, cy - o.height / 2)), w: o.width, h: o.height }
+  const vb = { x: cx - w / 2, y: Math.max(0, Math.min(TILE * k - h, cy - h / 2)), w, h }
   const tiles: SketchTile[] = []
   for (let ty = Math.max(0, Math.floor(vb.y / TILE)); ty <= Math.min(k - 1, Math.floor((vb.y + vb.h) / TILE)); ty++) {
     for (let tx = Math.floor(vb.x / TILE); tx <= Math.floor((vb.x + vb.w) / TILE); tx++)
@@ -52,20 +58,20 @@ export function buildRouteSketch(waypoints: readonly (LatLon & { method?: LegMet
   }
   const line = track.map(p => project(p, z)).map(p => `${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(' ')
   const points = marks.map(m => project({ lat: m.lat, lon: m.lon + shift }, z))
-  return { viewBox: `${vb.x.toFixed(1)} ${vb.y.toFixed(1)} ${vb.w} ${vb.h}`, vb, zoom: z, tiles, line, points, labels: gridLabels(vb, z) }
+  return { viewBox: `${vb.x.toFixed(1)} ${vb.y.toFixed(1)} ${vb.w.toFixed(1)} ${vb.h.toFixed(1)}`, scale, vb, zoom: z, tiles, line, points, labels: gridLabels(vb, z, scale) }
 }
 
 /** Latitude labels down the left edge and longitude labels along the bottom, at round degrees. */
-function gridLabels(vb: { x: number, y: number, w: number, h: number }, z: number): SketchLabel[] {
+function gridLabels(vb: { x: number, y: number, w: number, h: number }, z: number, scale: number): SketchLabel[] {
   const size = TILE * 2 ** z
   const west = (vb.x / size) * 360 - 180, east = ((vb.x + vb.w) / size) * 360 - 180
   const north = unprojectLat(vb.y, z), south = unprojectLat(vb.y + vb.h, z)
-  const step = labelStep(z)
+  const step = labelStep(z, scale)
   const labels: SketchLabel[] = []
   for (let lon = Math.ceil(west / step) * step; lon <= east; lon += step)
-    labels.push({ text: labelFor(lon, 'lon'), x: project({ lat: 0, lon }, z).x, y: vb.y + vb.h - 4 })
+    labels.push({ text: labelFor(lon, 'lon'), x: project({ lat: 0, lon }, z).x, y: vb.y + vb.h - 4 / scale })
   for (let lat = Math.ceil(south / step) * step; lat <= north; lat += step)
-    labels.push({ text: labelFor(lat, 'lat'), x: vb.x + 4, y: project({ lat, lon: 0 }, z).y - 3 })
+    labels.push({ text: labelFor(lat, 'lat'), x: vb.x + 4 / scale, y: project({ lat, lon: 0 }, z).y - 3 / scale })
   return labels
 }
 

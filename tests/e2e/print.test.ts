@@ -14,7 +14,7 @@ async function planIdByStatus(status: string) {
 describe('printable plan', () => {
   it('the master prints an approved plan: header, chart, legs, sign-off and cautions on A4', async () => {
     const id = await planIdByStatus('approved')
-    const page = await browser.newPage(1100, 1400)
+    const page = await browser.newPage(688, 1000)
     await signIn(page, 'master')
     await page.goto(`/plans/${id}/print`)
     const plan = page.getByTestId('print-plan')
@@ -39,7 +39,7 @@ describe('printable plan', () => {
 
   it('a plan not yet approved prints with a prominent NOT APPROVED box', async () => {
     const id = await planIdByStatus('submitted')
-    const page = await browser.newPage(1100, 1400)
+    const page = await browser.newPage(688, 1000)
     await signIn(page, 'planner')
     await page.goto(`/plans/${id}/print`)
     await page.getByTestId('print-not-approved').waitFor()

@@ -12,7 +12,7 @@ const fixture = (name: string) => readFileSync(fileURLToPath(new URL(`../fixture
 
 function form(file: { name: string, bytes: Buffer | string, type?: string }, fields: Record<string, string | number> = {}) {
   const body = new FormData()
-  body.append('file', new Blob([file.bytes], { type: file.type ?? 'application/octet-stream' }), file.name)
+  body.append('file', new Blob([typeof file.bytes === 'string' ? file.bytes : new Uint8Array(file.bytes)], { type: file.type ?? 'application/octet-stream' }), file.name)
   for (const [k, v] of Object.entries(fields)) body.append(k, String(v))
   return body
 }
