@@ -29,7 +29,7 @@ function labelStep(z: number, scale: number) {
 
 function labelFor(value: number, axis: 'lat' | 'lon') {
   const v = axis === 'lon' ? ((((value + 180) % 360) + 360) % 360) - 180 : value
-  const hemi = axis === 'lat' ? (v > 0 ? 'N' : v < 0 ? 'S' : '') : (v > 0 ? 'E' : v < 0 ? 'W' : '')
+  const hemi = axis === 'lat' ? (v > 0 ? 'N' : v < 0 ? 'S' : '') : (v > 0 && v < 180 ? 'E' : v < 0 && v > -180 ? 'W' : '')
   return `${Math.abs(Math.round(v))}°${hemi}`
 }
 
