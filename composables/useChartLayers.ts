@@ -36,7 +36,7 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
   const halo = L.polyline([], { color: C.halo, weight: 7, opacity: 0.75, interactive: false }).addTo(map)
   const track = L.polyline([], { color: C.track, weight: 3, interactive: false, className: 'pw-track' }).addTo(map)
   // Above the track: the great ellipse runs within a few miles of a geodesic and would hide under it.
-  const ellipse = L.polyline([], { color: C.ellipse, weight: 3, dashArray: '0.5 6', lineCap: 'round', interactive: false, className: 'pw-great-ellipse' }).addTo(map)
+  const ellipse = L.polyline([], { color: C.ellipse, weight: 3, dashArray: '0.5 8', lineCap: 'round', interactive: false, className: 'pw-great-ellipse' }).addTo(map)
   const vertexLayer = L.layerGroup().addTo(map)
   const landLayer = L.layerGroup().addTo(map)
   const markers: { marker: Leaflet.Marker, look: string, at: string }[] = []
