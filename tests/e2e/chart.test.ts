@@ -1,11 +1,25 @@
-import { describe, expect, it } from 'vitest'
+import { beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
-import { startServer } from '../support/server'
+import { demoPlans } from '../../db/seeds/demoData'
+import { loginAs, startServer } from '../support/server'
 import { screenshotDir, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
 const PACIFIC = 'Yokohama – Juan de Fuca, North Pacific crossing'
+let planId = 0
+
+// Start from the seeded waypoints and header, whatever another test file saved into this draft.
+beforeAll(async () => {
+  const api = await loginAs('planner')
+  planId = ((await api.request('/api/plans')).body as { id: number, title: string }[]).find(p => p.title === PACIFIC)!.id
+  const { plan } = (await api.request(`/api/plans/${planId}`)).body
+  const seed = demoPlans.find(p => p.title === PACIFIC)!
+  const waypoints = seed.waypoints.map(([name, lat, lon, method]) => ({ name, lat, lon, method }))
+  expect((await api.request(`/api/plans/${planId}/waypoints`, { method: 'PUT', body: { version: plan.version, waypoints } })).status).toBe(200)
+  const header = { version: plan.version + 1, title: PACIFIC, departureUtc: seed.departureUtc, speedKn: seed.speedKn, limitLat: seed.limitLat, departurePlaceId: plan.departurePlaceId, arrivalPlaceId: plan.arrivalPlaceId }
+  expect((await api.request(`/api/plans/${planId}`, { method: 'PUT', body: header })).status).toBe(200)
+})
 
 /** x coordinates of every vertex of an SVG path's `d` ("M x y L x y …"), with the number of subpaths. */
 async function pathPoints(page: Page, selector: string) {
@@ -23,9 +37,7 @@ describe('plan chart', () => {
   it('draws the North Pacific crossing across 180° as one track, and a dragged waypoint updates the sheet and legs', async () => {
     const page = await browser.newPage(1600, 1000)
     await signIn(page, 'planner')
-    const plans = await (await page.request.get('/api/plans')).json() as { id: number, title: string }[]
-    const plan = plans.find(p => p.title === PACIFIC)!
-    await page.goto(`/plans/${plan.id}`)
+    await page.goto(`/plans/${planId}`)
     const chart = page.getByTestId('plan-chart')
     await chart.locator('path.pw-track').waitFor()
     await expect.poll(() => chart.locator('img.leaflet-tile-loaded').count(), { timeout: 60_000 }).toBeGreaterThan(3)
