@@ -70,8 +70,11 @@ function gridLabels(vb: { x: number, y: number, w: number, h: number }, z: numbe
   const labels: SketchLabel[] = []
   for (let lon = Math.ceil(west / step) * step; lon <= east; lon += step)
     labels.push({ text: labelFor(lon, 'lon'), x: project({ lat: 0, lon }, z).x, y: vb.y + vb.h - 4 / scale })
-  for (let lat = Math.ceil(south / step) * step; lat <= north; lat += step)
-    labels.push({ text: labelFor(lat, 'lat'), x: vb.x + 4 / scale, y: project({ lat, lon: 0 }, z).y - 3 / scale })
+  for (let lat = Math.ceil(south / step) * step; lat <= north; lat += step) {
+    const y = project({ lat, lon: 0 }, z).y - 3 / scale
+    // Clear of the longitude labels along the bottom edge and of the top edge.
+    if (y < vb.y + vb.h - 16 / scale && y > vb.y + 10 / scale) labels.push({ text: labelFor(lat, 'lat'), x: vb.x + 4 / scale, y })
+  }
   return labels
 }
 

@@ -47,6 +47,19 @@ describe('printable plan', () => {
     await page.emulateMedia({ media: 'print' })
     await shoot(page, 'print-submitted')
   })
+
+  it('a draft across the 180° meridian prints its chart as one track', async () => {
+    const plans = (await (await loginAs('planner')).request('/api/plans')).body as { id: number, title: string }[]
+    const id = plans.find(p => p.title.startsWith('Yokohama'))!.id
+    const page = await browser.newPage(688, 1000)
+    await signIn(page, 'planner')
+    await page.goto(`/plans/${id}/print`)
+    await page.getByTestId('print-not-approved').waitFor()
+    expect(await page.getByTestId('route-sketch').locator('text', { hasText: /^180°$/ }).count()).toBe(1)
+    await page.waitForLoadState('networkidle')
+    await page.emulateMedia({ media: 'print' })
+    await shoot(page, 'print-pacific-draft')
+  })
 })
 
 describe('route file import in the browser', () => {
