@@ -6,9 +6,10 @@ export function useShoreWrite(key: MaybeRefOrGetter<string>) {
     busy.value = true
     error.value = null
     try {
-      const result = await $fetch<T>(url, { method, body: body as Record<string, unknown> | undefined })
+      // The URL is built at run time, so the typed-route inference has nothing to work with.
+      const result = await ($fetch as (url: string, opts: object) => Promise<unknown>)(url, { method, body })
       await refreshNuxtData(toValue(key))
-      return result
+      return result as T
     }
     catch (e: any) {
       error.value = e?.data?.message || e?.statusMessage || e?.message || 'The change was not saved'
