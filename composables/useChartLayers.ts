@@ -30,13 +30,15 @@ const ll = (points: LatLon[]) => points.map(p => [p.lat, p.lon] as [number, numb
 
 export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLayerHandlers) {
   const C = CHART_COLOURS
-  const corridor = L.polygon([], { color: C.corridor, weight: 1, opacity: 0.45, fillColor: C.corridor, fillOpacity: 0.2, interactive: false, className: 'pw-corridor' }).addTo(map)
+  // Leaflet simplifies paths to 1 px by default, which shows as kinks on a long geodesic's curve.
+  const smoothFactor = 0.25
+  const corridor = L.polygon([], { color: C.corridor, weight: 1, opacity: 0.45, fillColor: C.corridor, fillOpacity: 0.2, interactive: false, className: 'pw-corridor', smoothFactor }).addTo(map)
   const limit = L.polyline([], { color: C.limit, weight: 1.5, dashArray: '10 4 2 4', interactive: false, className: 'pw-limit-parallel' }).addTo(map)
   const rhumb = L.polyline([], { color: C.rhumb, weight: 2, dashArray: '9 6', interactive: false, className: 'pw-rhumb-alternative' }).addTo(map)
-  const halo = L.polyline([], { color: C.halo, weight: 7, opacity: 0.75, interactive: false }).addTo(map)
-  const track = L.polyline([], { color: C.track, weight: 3, interactive: false, className: 'pw-track' }).addTo(map)
+  const halo = L.polyline([], { color: C.halo, weight: 7, opacity: 0.75, interactive: false, smoothFactor }).addTo(map)
+  const track = L.polyline([], { color: C.track, weight: 3, interactive: false, className: 'pw-track', smoothFactor }).addTo(map)
   // Above the track: the great ellipse runs within a few miles of a geodesic and would hide under it.
-  const ellipse = L.polyline([], { color: C.ellipse, weight: 3, dashArray: '0.5 8', lineCap: 'round', interactive: false, className: 'pw-great-ellipse' }).addTo(map)
+  const ellipse = L.polyline([], { color: C.ellipse, weight: 3, dashArray: '0.5 8', lineCap: 'round', interactive: false, className: 'pw-great-ellipse', smoothFactor }).addTo(map)
   const vertexLayer = L.layerGroup().addTo(map)
   const landLayer = L.layerGroup().addTo(map)
   const markers: { marker: Leaflet.Marker, look: string, at: string }[] = []

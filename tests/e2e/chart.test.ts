@@ -99,4 +99,30 @@ describe('plan chart', () => {
     await shoot(page, 'chart-pacific')
     await chart.screenshot({ path: `${screenshotDir}/chart-pacific-map.png` })
   })
+
+  it('keeps the drawn track under the limiting parallel once the limit is applied', async () => {
+    const page = await browser.newPage(1600, 1000)
+    await signIn(page, 'planner')
+    await page.goto(`/plans/${planId}`)
+    const chart = page.getByTestId('plan-chart')
+    await chart.locator('path.pw-track').waitFor()
+    // SVG y grows southwards: the track's northernmost point has the smallest y.
+    const ys = async (selector: string) => {
+      const d = await chart.locator(selector).getAttribute('d') ?? ''
+      return [...d.matchAll(/[ML]\s*(-?[\d.]+)[ ,](-?[\d.]+)/g)].map(m => Number(m[2]))
+    }
+    const limitY = async () => Math.min(...await ys('path.pw-limit-parallel'))
+    expect(Math.min(...await ys('path.pw-track'))).toBeLessThan(await limitY() - 5)
+    expect(await chart.locator('.pw-vertex-marker').getAttribute('title')).toMatch(/5\d°/)
+
+    await page.getByTestId('apply-limit').click()
+    await expect.poll(async () => Math.min(...await ys('path.pw-track')), { timeout: 10_000 }).toBeGreaterThanOrEqual(await limitY() - 1)
+    // Any vertex left lies on or under 48°45'N.
+    for (const title of await chart.locator('.pw-vertex-marker').evaluateAll(els => els.map(e => e.getAttribute('title') ?? ''))) {
+      const [, deg, min] = /(\d+)°([\d.]+)/.exec(title)!
+      expect(Number(deg) + Number(min) / 60).toBeLessThanOrEqual(48.75 + 0.05)
+    }
+    await shoot(page, 'chart-pacific-limit')
+    await chart.screenshot({ path: `${screenshotDir}/chart-pacific-limit-map.png` })
+  })
 })
