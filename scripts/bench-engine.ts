@@ -8,21 +8,11 @@ import { rhumbInverse } from '../shared/utils/rhumb'
 import { computeLegTable } from '../shared/utils/legTable'
 import type { LegTableWaypoint } from '../shared/utils/legTable'
 import { densifyRoute } from '../shared/utils/track'
+import { seededRandom } from '../tests/unit/support/random'
 
 const G = geodesic.Geodesic
 const raw = G.WGS84
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 40)
-
-function seeded(seed: number) {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6D2B79F5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
 
 /** Best time (ms) of each side over alternating rounds. */
 function sideBySide(a: () => void, b: () => void, rounds = ROUNDS): [number, number] {
@@ -36,7 +26,7 @@ function sideBySide(a: () => void, b: () => void, rounds = ROUNDS): [number, num
   return [bestA, bestB]
 }
 
-const rnd = seeded(1852)
+const rnd = seededRandom(1852)
 const N = 4_000
 const lat = new Float64Array(N)
 const lon = new Float64Array(N)

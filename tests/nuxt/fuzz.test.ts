@@ -7,19 +7,10 @@ import { createScratchDatabase, tableFingerprints } from '../support/database'
 import { client, loginAs, startServer, url, type Api } from '../support/server'
 import { listApiRoutes, routePath } from '../support/apiRoutes'
 import { BODYLESS, RULES } from '../support/accessRules'
+import { seededRandom } from '../unit/support/random'
 
 const databaseUrl = await createScratchDatabase('passagewright_fuzz')
 await startServer({ NUXT_DATABASE_URL: databaseUrl })
-
-/** Small deterministic PRNG (mulberry32) so a failure can be replayed. */
-function prng(seed: number) {
-  return () => {
-    seed = (seed + 0x6D2B79F5) | 0
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed)
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
 
 const MB_STRING = 'x'.repeat(1_000_000)
 const deep = (n: number) => `${'{"a":'.repeat(n)}1${'}'.repeat(n)}`
@@ -60,7 +51,7 @@ describe('fuzzing every JSON route', () => {
     expect(targets.length).toBeGreaterThan(15)
     const before = await tableFingerprints(databaseUrl)
 
-    const rand = prng(20261201)
+    const rand = seededRandom(20261201)
     const TOTAL = 10_200
     const failures: string[] = []
     const counts: Record<number, number> = {}

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { fitFuelCurve, FuelDataError, fuelForArrival, fuelRate, legFuelTonnes, planFuel, reserveTonnes, speedForArrival } from '#shared/utils/fuel'
 import { fuelPointsSchema, fuelReserveSchema } from '#shared/types/fuel'
+import { seededRandom } from './support/random'
 
 // The law itself is common practice (../shared/check-values.md, "Facts of the trade": fuel per day
 // rises roughly with the cube of speed). c = 0.011 (≈ 30 t/day at 14 kn) is an invented coefficient;
@@ -8,17 +9,6 @@ import { fuelPointsSchema, fuelReserveSchema } from '#shared/types/fuel'
 const cubic = { c: 0.011, k: 3 }
 const fromLaw = (c: number, k: number, speeds: number[]) => speeds.map(speedKn => ({ speedKn, tonnesPerDay: c * speedKn ** k }))
 
-/** Mulberry32: a small seeded PRNG so that the noisy case is the same on every run. */
-function mulberry32(seed: number) {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6D2B79F5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
 
 /** Standard normal deviate by Box–Muller. */
 function gaussian(random: () => number) {
@@ -58,7 +48,7 @@ describe('fitFuelCurve', () => {
   })
 
   it('stays near the law on noisy points (3 % log-normal scatter, seeded)', () => {
-    const random = mulberry32(20260301)
+    const random = seededRandom(20260301)
     const speeds = [9, 10.5, 12, 13, 14, 15.5, 17, 19]
     const points = speeds.map(speedKn => ({ speedKn, tonnesPerDay: cubic.c * speedKn ** 3 * Math.exp(0.03 * gaussian(random)) }))
     const fit = fitFuelCurve(points)
