@@ -37,16 +37,19 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
   /** The last land check of the current track, cleared by any change to the waypoints. */
   const landCheck = shallowRef<LandCheckResult | null>(null)
 
-  const snapshot = () => JSON.stringify({ header: header.value, waypoints: waypoints.value })
+  // Waypoints are replaced whole on every change, so reading each one raw (not through the
+  // reactive proxy) keeps the dependency on the list while the engine runs at full speed.
+  const rawWaypoints = computed(() => waypoints.value.map(w => toRaw(w)))
+  const snapshot = () => JSON.stringify({ header: header.value, waypoints: rawWaypoints.value })
   const dirty = computed(() => snapshot() !== saved.value)
   const savedParts = computed(() => (saved.value ? JSON.parse(saved.value) as { header: PlanHeaderDraft, waypoints: Waypoint[] } : null))
   const headerDirty = computed(() => JSON.stringify(header.value) !== JSON.stringify(savedParts.value?.header))
-  const waypointsDirty = computed(() => JSON.stringify(waypoints.value) !== JSON.stringify(savedParts.value?.waypoints))
+  const waypointsDirty = computed(() => JSON.stringify(rawWaypoints.value) !== JSON.stringify(savedParts.value?.waypoints))
   const editable = computed(() => roleMayEdit.value && (status.value === 'draft' || status.value === 'returned'))
   const hasCellErrors = computed(() => Object.keys(cellErrors.value).length > 0)
 
   const legTable = computed(() => {
-    const valid = waypoints.value.filter(w => Number.isFinite(w.lat) && Number.isFinite(w.lon))
+    const valid = rawWaypoints.value.filter(w => Number.isFinite(w.lat) && Number.isFinite(w.lon))
     if (valid.length < 2 || !(header.value.speedKn > 0)) return null
     try { return computeLegTable(valid, header.value.departureUtc, header.value.speedKn) }
     catch { return null }
