@@ -26,8 +26,8 @@ describe('sign-off and crew brief across two instances', () => {
     const api = await loginAs('planner')
     const vessels = (await api.request('/api/vessels')).body as { id: number, name: string }[]
     const vesselId = vessels.find(v => v.name === 'Kestrel Dawn')!.id
-    const { id } = (await api.request('/api/plans', { method: 'POST', body: { vesselId, title: 'Sign-off run – Elbe to Skaw', departureUtc: '2027-02-10T06:00:00Z', speedKn: 13 } })).body
-    await api.request(`/api/plans/${id}/waypoints`, { method: 'PUT', body: { version: 1, waypoints: [{ name: 'Elbe 1', lat: 54.0, lon: 8.1 }, { name: 'Skaw', lat: 57.8, lon: 10.7, method: 'geodesic' }] } })
+    const { id } = (await api.request('/api/plans', { method: 'POST', body: { vesselId, title: 'Sign-off run – Lizard to Ushant', departureUtc: '2027-02-10T06:00:00Z', speedKn: 13 } })).body
+    await api.request(`/api/plans/${id}/waypoints`, { method: 'PUT', body: { version: 1, waypoints: [{ name: 'Lizard offing', lat: 49.85, lon: -5.2 }, { name: 'Ushant offing', lat: 48.6, lon: -5.4, method: 'geodesic' }] } })
 
     const planner = await browser.newPage()
     await signIn(planner, 'planner')
@@ -42,6 +42,7 @@ describe('sign-off and crew brief across two instances', () => {
     await master.goto(`${second.url}/plans/${id}`)
     await master.getByRole('button', { name: 'Approve' }).click()
     await master.getByTestId('approval-line').getByText('Approved by').waitFor()
+    await master.getByTestId('signoff-panel').locator('[data-status="approved"]').waitFor()
     await shoot(master, 'signoff-approved')
 
     // The planner's session, made on the first instance, works on the second.
