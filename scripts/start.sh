@@ -13,8 +13,11 @@ export NUXT_SMTP_URL="${NUXT_SMTP_URL:-smtp://127.0.0.1:2525}"
 MAIL_PID=""
 [[ "$NUXT_SMTP_URL" == smtp://127.0.0.1:2525 ]] && start_mail_fake 2525 "$DATA/mail"
 
+APP_PID=""
 cleanup() {
+  trap - EXIT INT TERM
   log "stopping"
+  [ -n "$APP_PID" ] && kill "$APP_PID" 2>/dev/null || true
   [ -n "$MAIL_PID" ] && kill "$MAIL_PID" 2>/dev/null || true
   [ "${PG_STARTED_HERE:-0}" = 1 ] && stop_postgres
 }
