@@ -38,17 +38,30 @@ ensure_node_modules() {
 
 # Runs a PostgreSQL program as the cluster owner: `postgres` when we are root, else ourselves.
 pg_run() {
-  if [ "$(id -u)" = 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  if [ "$(id -u)" = 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 port_in_use() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 
+# As root the cluster belongs to `postgres`; when that user cannot reach the project folder
+# (a checkout under a private home directory), the cluster lives in /var/tmp instead.
+place_cluster_for_postgres_user() {
+  [ "$(id -u)" = 0 ] || return 0
+  if ! runuser -u postgres -- test -x "$DATA" 2>/dev/null; then
+    local alt="/var/tmp/passagewright-$(printf '%s' "$ROOT" | sha256sum | cut -c1-12)"
+    mkdir -p "$alt"
+    PG_DATA="$alt/pg"; PG_SOCK="$alt/pg-sock"
+    log "the postgres user cannot reach $DATA; keeping the cluster in $alt"
+  fi
+}
+
 start_postgres() {
   ensure_postgres_installed
+  place_cluster_for_postgres_user
   mkdir -p "$PG_SOCK"
-  if [ "$(id -u)" = 0 ]; then chown postgres "$DATA" "$PG_SOCK"; [ -d "$PG_DATA" ] && chown -R postgres "$PG_DATA"; fi
+  if [ "$(id -u)" = 0 ]; then chown postgres "$DATA" "$PG_SOCK" "$(dirname "$PG_DATA")"; [ -d "$PG_DATA" ] && chown -R postgres "$PG_DATA"; fi
   if [ ! -f "$PG_DATA/PG_VERSION" ]; then
-    log "creating the database cluster in .data/pg"
+    log "creating the database cluster in ${PG_DATA#$ROOT/}"
     mkdir -p "$PG_DATA"; [ "$(id -u)" = 0 ] && chown postgres "$PG_DATA"
     pg_run "$PGBIN/initdb" -D "$PG_DATA" -U postgres --auth=trust -E UTF8 --locale=C >/dev/null
   fi
@@ -57,7 +70,7 @@ start_postgres() {
     PG_STARTED_HERE=0
   else
     port_in_use "$PG_PORT" && die "port $PG_PORT is taken by another program; set PW_PG_PORT to a free port"
-    pg_run "$PGBIN/pg_ctl" -D "$PG_DATA" -l "$DATA/pg.log" -w \
+    pg_run "$PGBIN/pg_ctl" -D "$PG_DATA" -l "$(dirname "$PG_DATA")/pg.log" -w \
       -o "-p $PG_PORT -c listen_addresses=127.0.0.1 -k $PG_SOCK -c max_connections=200 -c fsync=${PW_PG_FSYNC:-on}" start >/dev/null
     log "PostgreSQL started on 127.0.0.1:$PG_PORT"
     PG_STARTED_HERE=1
