@@ -1,11 +1,10 @@
 // From the planner's desk to the crew's inboxes, in the browser, with the work alternating between
 // two app instances on one database (scale-out): the planner submits on one, the master approves
 // on the other, the brief is sent and the outbox shows it delivered once.
-import { existsSync, readdirSync, readFileSync } from 'node:fs'
-import { join } from 'node:path'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { loginAs, startServer, url } from '../support/server'
 import { startInstance, type Instance } from '../support/instances'
+import { mailsFor } from '../support/mail'
 import { shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
@@ -14,12 +13,7 @@ let second: Instance
 beforeAll(async () => { second = await startInstance() })
 afterAll(async () => { await second?.stop() })
 
-function deliveredFor(outboxId: number) {
-  const dir = process.env.PW_MAIL_DIR!
-  if (!existsSync(dir)) return []
-  return readdirSync(dir).map(f => JSON.parse(readFileSync(join(dir, f), 'utf8')))
-    .filter(m => m.headers?.['x-passagewright-outbox-id'] === String(outboxId))
-}
+const deliveredFor = (outboxId: number) => mailsFor(process.env.PW_MAIL_DIR!, outboxId)
 
 describe('sign-off and crew brief across two instances', () => {
   it('planner submits on one instance, master approves on the other, the brief goes out once', async () => {

@@ -2,7 +2,7 @@
 // and queues briefs; the sending is done by server processes this file starts and kills itself,
 // so it can take the mail server away, restart the app mid-delivery and count what arrives.
 import { type ChildProcess, spawn } from 'node:child_process'
-import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync } from 'node:fs'
+import { mkdirSync, rmSync } from 'node:fs'
 import { createServer } from 'node:net'
 import { join } from 'node:path'
 import knex from 'knex'
@@ -10,6 +10,8 @@ import PgBoss from 'pg-boss'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { PLANNING_CAUTION, LAND_CHECK_CAUTION } from '#shared/utils/cautions'
 import { type Api, loginAs, rootDir, startServer } from '../support/server'
+import { freePort } from '../support/instances'
+import { mailsFor } from '../support/mail'
 
 await startServer({ NUXT_OUTBOX_WORKER: 'off' })
 
@@ -19,14 +21,6 @@ const mainSmtpUrl = process.env.NUXT_SMTP_URL || 'smtp://127.0.0.1:2526'
 const db = knex({ client: 'pg', connection: process.env.NUXT_DATABASE_URL })
 const children = new Set<ChildProcess>()
 
-interface Mail { envelopeTo: string[], subject: string, text: string, html: string | null, messageId: string, headers: Record<string, string> }
-
-function mailsFor(dir: string, outboxId: number): Mail[] {
-  if (!existsSync(dir)) return []
-  return readdirSync(dir).filter(f => f.endsWith('.json')).map(f => JSON.parse(readFileSync(join(dir, f), 'utf8')) as Mail)
-    .filter(m => m.headers['x-passagewright-outbox-id'] === String(outboxId))
-}
-
 async function waitFor<T>(what: string, probe: () => Promise<T | undefined | false> | T | undefined | false, timeoutMs = 60_000): Promise<T> {
   const until = Date.now() + timeoutMs
   for (;;) {
@@ -35,15 +29,6 @@ async function waitFor<T>(what: string, probe: () => Promise<T | undefined | fal
     if (Date.now() > until) throw new Error(`timed out waiting for ${what}`)
     await new Promise(resolve => setTimeout(resolve, 250))
   }
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer().listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as { port: number }
-      server.close(() => resolve(port))
-    }).on('error', reject)
-  })
 }
 
 function start(command: string[], env: Record<string, string>) {

@@ -1,11 +1,10 @@
 // Two app instances on different ports, one database, one session password: sessions made on one
 // work on the other, a plan goes through sign-off alternating between them, and with both outbox
 // workers running each crew brief is delivered exactly once.
-import { existsSync, readdirSync, readFileSync } from 'node:fs'
-import { join } from 'node:path'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { demoUsers, DEMO_PASSWORD, type DemoUser } from '../support/server'
 import { startInstance, type Instance } from '../support/instances'
+import { mailsFor } from '../support/mail'
 
 let a: Instance, b: Instance
 beforeAll(async () => {
@@ -51,10 +50,7 @@ describe('two instances behind one database', () => {
     const brief = await call(a.url, planner, `/api/plans/${id}/brief`, 'POST')
     expect([200, 201, 202]).toContain(brief.status)
     const outboxId = brief.body.id ?? brief.body.message?.id
-    const mailDir = process.env.PW_MAIL_DIR!
-    const delivered = () => existsSync(mailDir)
-      ? readdirSync(mailDir).map(f => JSON.parse(readFileSync(join(mailDir, f), 'utf8'))).filter(m => m.headers?.['x-passagewright-outbox-id'] === String(outboxId))
-      : []
+    const delivered = () => mailsFor(process.env.PW_MAIL_DIR!, outboxId)
     await expect.poll(() => delivered().length, { timeout: 60_000, interval: 500 }).toBe(1)
     // Both workers have had time to pick it up again if they were going to.
     await new Promise(r => setTimeout(r, 3000))
