@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { startServer } from '../support/server'
-import { shoot, signIn, useBrowser } from '../support/browser'
+import { openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
@@ -8,7 +8,7 @@ const browser = useBrowser()
 describe('passage board', () => {
   it('a planner signs in, sees the demo plans with their states, and signs out', async () => {
     const page = await browser.newPage()
-    await page.goto('/')
+    await openPage(page, '/')
     await page.waitForURL(/\/login/)
     await signIn(page, 'planner')
     const board = page.getByTestId('plan-board')
@@ -27,7 +27,7 @@ describe('passage board', () => {
 
     await page.getByRole('button', { name: 'Sign out' }).click()
     await page.waitForURL(/\/login/)
-    await page.goto('/')
+    await openPage(page, '/')
     await page.waitForURL(/\/login/)
   })
 })

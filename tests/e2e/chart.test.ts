@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { demoPlans } from '../../db/seeds/demoData'
 import { loginAs, startServer } from '../support/server'
-import { screenshotDir, shoot, signIn, useBrowser } from '../support/browser'
+import { screenshotDir, openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
@@ -37,7 +37,7 @@ describe('plan chart', () => {
   it('draws the North Pacific crossing across 180° as one track, and a dragged waypoint updates the sheet and legs', async () => {
     const page = await browser.newPage(1600, 1000)
     await signIn(page, 'planner')
-    await page.goto(`/plans/${planId}`)
+    await openPage(page, `/plans/${planId}`)
     const chart = page.getByTestId('plan-chart')
     await chart.locator('path.pw-track').waitFor()
     await expect.poll(() => chart.locator('img.leaflet-tile-loaded').count(), { timeout: 60_000 }).toBeGreaterThan(3)
@@ -103,7 +103,7 @@ describe('plan chart', () => {
   it('keeps the drawn track under the limiting parallel once the limit is applied', async () => {
     const page = await browser.newPage(1600, 1000)
     await signIn(page, 'planner')
-    await page.goto(`/plans/${planId}`)
+    await openPage(page, `/plans/${planId}`)
     const chart = page.getByTestId('plan-chart')
     await chart.locator('path.pw-track').waitFor()
     // SVG y grows southwards: the track's northernmost point has the smallest y.

@@ -1,7 +1,7 @@
 import { fileURLToPath } from 'node:url'
 import { describe, expect, it } from 'vitest'
 import { loginAs, startServer } from '../support/server'
-import { shoot, signIn, useBrowser } from '../support/browser'
+import { openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
@@ -16,7 +16,7 @@ describe('printable plan', () => {
     const id = await planIdByStatus('approved')
     const page = await browser.newPage(688, 1000)
     await signIn(page, 'master')
-    await page.goto(`/plans/${id}/print`)
+    await openPage(page, `/plans/${id}/print`)
     const plan = page.getByTestId('print-plan')
     await plan.waitFor()
     expect(await page.getByTestId('signed-in-user').count()).toBe(0)
@@ -41,7 +41,7 @@ describe('printable plan', () => {
     const id = await planIdByStatus('submitted')
     const page = await browser.newPage(688, 1000)
     await signIn(page, 'planner')
-    await page.goto(`/plans/${id}/print`)
+    await openPage(page, `/plans/${id}/print`)
     await page.getByTestId('print-not-approved').waitFor()
     expect(await page.getByTestId('print-signoff').textContent()).toMatch(/Submitted for approval.*\(planner\)/)
     await page.emulateMedia({ media: 'print' })
@@ -53,7 +53,7 @@ describe('printable plan', () => {
     const id = plans.find(p => p.title.startsWith('Yokohama'))!.id
     const page = await browser.newPage(688, 1000)
     await signIn(page, 'planner')
-    await page.goto(`/plans/${id}/print`)
+    await openPage(page, `/plans/${id}/print`)
     await page.getByTestId('print-not-approved').waitFor()
     expect(await page.getByTestId('route-sketch').locator('text', { hasText: /^180°$/ }).count()).toBe(1)
     await page.waitForLoadState('networkidle')
@@ -84,7 +84,7 @@ describe('route file import in the browser', () => {
   it('a file with a bad latitude shows the error with its line and cannot be created', async () => {
     const page = await browser.newPage()
     await signIn(page, 'planner')
-    await page.goto('/plans/import')
+    await openPage(page, '/plans/import')
     await page.getByLabel('Route file').setInputFiles(fileURLToPath(new URL('../fixtures/routes/latitude-95.csv', import.meta.url)))
     const errors = page.getByTestId('import-errors')
     await errors.waitFor()

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { loginAs, startServer, url } from '../support/server'
 import { startInstance, type Instance } from '../support/instances'
 import { mailsFor } from '../support/mail'
-import { shoot, signIn, useBrowser } from '../support/browser'
+import { openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
@@ -25,22 +25,22 @@ describe('sign-off and crew brief across two instances', () => {
 
     const planner = await browser.newPage()
     await signIn(planner, 'planner')
-    await planner.goto(`/plans/${id}`)
+    await openPage(planner, `/plans/${id}`)
     await planner.getByRole('button', { name: 'Submit for sign-off' }).click()
     await planner.getByTestId('signoff-panel').locator('[data-status="submitted"]').waitFor()
     expect(await planner.getByRole('button', { name: 'Approve' }).count()).toBe(0)
 
     const master = await browser.newPage()
-    await master.goto(`${second.url}/login`)
+    await openPage(master, `${second.url}/login`)
     await signIn(master, 'master', second.url)
-    await master.goto(`${second.url}/plans/${id}`)
+    await openPage(master, `${second.url}/plans/${id}`)
     await master.getByRole('button', { name: 'Approve' }).click()
     await master.getByTestId('approval-line').getByText('Approved by').waitFor()
     await master.getByTestId('signoff-panel').locator('[data-status="approved"]').waitFor()
     await shoot(master, 'signoff-approved')
 
     // The planner's session, made on the first instance, works on the second.
-    await planner.goto(`${second.url}/plans/${id}`)
+    await openPage(planner, `${second.url}/plans/${id}`)
     await planner.getByTestId('approval-line').getByText('Approved by').waitFor()
     await planner.getByRole('button', { name: 'Send crew brief' }).click()
     await planner.getByRole('status').waitFor()
@@ -48,7 +48,7 @@ describe('sign-off and crew brief across two instances', () => {
     const outbox = (await api.request('/api/outbox')).body as { id: number, planId: number }[]
     const message = outbox.find(m => m.planId === id)!
     await expect.poll(() => deliveredFor(message.id).length, { timeout: 60_000, interval: 500 }).toBe(1)
-    await planner.goto(`${url('')}/outbox`)
+    await openPage(planner, `${url('')}/outbox`)
     await planner.getByTestId('outbox-table').locator('[data-state="sent"]').first().waitFor()
     await shoot(planner, 'outbox-sent')
     await new Promise(r => setTimeout(r, 2000))

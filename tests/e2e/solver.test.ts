@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { startServer } from '../support/server'
-import { shoot, signIn, useBrowser } from '../support/browser'
+import { openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
@@ -9,7 +9,7 @@ describe('quick solver', () => {
   it('answers as the navigator types: three methods side by side, the vertex, the direct problem', async () => {
     const page = await browser.newPage()
     await signIn(page, 'planner')
-    await page.goto('/solver')
+    await openPage(page, '/solver')
     await page.getByTestId('solver-caution').waitFor()
     const results = page.getByTestId('solver-results')
     await results.waitFor()

@@ -5,7 +5,7 @@ import { readFile } from 'node:fs/promises'
 import pg from 'pg'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { startServer } from '../support/server'
-import { shoot, signIn, useBrowser } from '../support/browser'
+import { openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
@@ -33,7 +33,7 @@ describe('distance tables page', () => {
   it('builds a large table with a progress bar, shows the flags and exports CSV', async () => {
     const page = await browser.newPage()
     await signIn(page, 'shore')
-    await page.goto('/tables')
+    await openPage(page, '/tables')
     await page.getByPlaceholder('e.g. Indian Ocean ports').fill('Oceans and ports')
     await page.getByRole('button', { name: 'Select all' }).click()
     expect(await page.getByTestId('place-picker').locator('input:checked').count()).toBeGreaterThan(EXTRA)

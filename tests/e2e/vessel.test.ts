@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { startServer } from '../support/server'
-import { shoot, signIn, useBrowser } from '../support/browser'
+import { openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
@@ -9,7 +9,7 @@ describe('shore desk pages', () => {
   it('the vessel page plots the fuel points and the fitted curve', async () => {
     const page = await browser.newPage()
     await signIn(page, 'shore')
-    await page.goto('/vessels')
+    await openPage(page, '/vessels')
     await page.getByRole('link', { name: 'Kestrel Dawn' }).click()
     await page.waitForURL(/\/vessels\/\d+/)
     const plot = page.getByTestId('fuel-plot')
@@ -24,7 +24,7 @@ describe('shore desk pages', () => {
   it('the place library lists, searches and previews a CSV import', async () => {
     const page = await browser.newPage()
     await signIn(page, 'shore')
-    await page.goto('/places')
+    await openPage(page, '/places')
     const table = page.getByTestId('place-table')
     await table.getByText('Yokohama', { exact: true }).waitFor()
     await page.getByLabel('Search places').fill('pilot')
@@ -41,7 +41,7 @@ describe('shore desk pages', () => {
   it('an admin lists the company\'s users and sees the password rule', async () => {
     const page = await browser.newPage()
     await signIn(page, 'admin')
-    await page.goto('/admin/users')
+    await openPage(page, '/admin/users')
     await page.getByTestId('user-table').getByText('shore@kestrel-bight.example').waitFor()
     expect(await page.getByTestId('user-table').getByText('larkspur-reach').count()).toBe(0)
     await page.getByLabel('Initial password').fill('short')

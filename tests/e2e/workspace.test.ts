@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { demoPlans } from '../../db/seeds/demoData'
 import { loginAs, startServer } from '../support/server'
-import { shoot, signIn, useBrowser } from '../support/browser'
+import { openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
@@ -32,7 +32,7 @@ describe('plan workspace', () => {
   it('edits, splits, holds a limiting latitude and saves the Yokohama – Juan de Fuca draft', async () => {
     const page = await browser.newPage(1600, 1000)
     await signIn(page, 'planner')
-    await page.goto(`/plans/${planId}`)
+    await openPage(page, `/plans/${planId}`)
     await page.getByTestId('plan-workspace').waitFor()
     expect(await rows(page).count()).toBe(4)
     expect(await page.getByTestId('save-state').textContent()).toBe('saved')
@@ -100,7 +100,7 @@ describe('plan workspace', () => {
   it('keeps unsaved changes across a reload', async () => {
     const page = await browser.newPage(1600, 1000)
     await signIn(page, 'planner')
-    await page.goto(`/plans/${planId}`)
+    await openPage(page, `/plans/${planId}`)
     await page.getByTestId('plan-workspace').waitFor()
     const name = page.getByTestId('waypoint-row').nth(1).locator('[data-cell="name"] input')
     await name.fill('Offing, renamed')
@@ -118,7 +118,7 @@ describe('plan workspace', () => {
   it('shows the draft read only to a shore user', async () => {
     const page = await browser.newPage(1600, 1000)
     await signIn(page, 'shore')
-    await page.goto(`/plans/${planId}`)
+    await openPage(page, `/plans/${planId}`)
     await page.getByTestId('plan-workspace').waitFor()
     expect(await page.getByTestId('save').count()).toBe(0)
     await page.getByTestId('read-only-note').waitFor()
@@ -130,7 +130,7 @@ describe('plan workspace', () => {
   it('keeps the draft on a conflict, shows what changed, and overwrites deliberately', async () => {
     const page = await browser.newPage(1600, 1000)
     await signIn(page, 'planner')
-    await page.goto(`/plans/${planId}`)
+    await openPage(page, `/plans/${planId}`)
     await page.getByTestId('plan-workspace').waitFor()
     const mine = await rows(page).count()
 
@@ -159,7 +159,7 @@ describe('plan workspace', () => {
   it('creates a plan from the header form, starting with the departure and arrival places', async () => {
     const page = await browser.newPage(1600, 1000)
     await signIn(page, 'planner')
-    await page.goto('/plans/new')
+    await openPage(page, '/plans/new')
     await page.getByTestId('new-plan-form').waitFor()
     await page.getByRole('button', { name: 'Create plan' }).click()
     await page.getByText('title needs at least 3 characters').waitFor()
@@ -186,7 +186,7 @@ describe('plan workspace', () => {
   it('reorders with the keyboard, inserts from the place library and checks the track against land', async () => {
     const page = await browser.newPage(1600, 1000)
     await signIn(page, 'planner')
-    await page.goto(`/plans/${planId}`)
+    await openPage(page, `/plans/${planId}`)
     await page.getByTestId('plan-workspace').waitFor()
     const names = () => rows(page).locator('[data-cell="name"] input').evaluateAll(els => els.map(e => (e as HTMLInputElement).value))
     const start = await names()

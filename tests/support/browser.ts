@@ -1,6 +1,6 @@
 // Debian's Chromium driven by playwright-core (never a downloaded browser).
 import { mkdirSync } from 'node:fs'
-import { chromium, type Browser, type Page } from 'playwright-core'
+import { chromium, type Browser, type Page, type Response } from 'playwright-core'
 import { afterAll, beforeAll } from 'vitest'
 import { DEMO_PASSWORD, demoUsers, rootDir, url, type DemoUser } from './server'
 
@@ -24,8 +24,15 @@ export function useBrowser() {
   }
 }
 
+/** Loads `path` (server-rendered) and waits until Nuxt has hydrated it; use before any typing or clicking. */
+export async function openPage(page: Page, path: string): Promise<Response | null> {
+  const response = await page.goto(path)
+  await page.locator('html[data-hydrated]').waitFor({ state: 'attached' })
+  return response
+}
+
 export async function signIn(page: Page, who: DemoUser, base = '') {
-  await page.goto(`${base}/login`)
+  await openPage(page, `${base}/login`)
   await page.getByLabel('E-mail').fill(demoUsers[who])
   await page.getByLabel('Password').fill(DEMO_PASSWORD)
   await page.getByRole('button', { name: 'Sign in' }).click()
