@@ -1,8 +1,7 @@
 import { landCheckSchema, LAND_CHECK_RESULT_CAUTION } from '#shared/types/landCheck'
 import type { LandCheckResult } from '#shared/types/landCheck'
 
-export default defineEventHandler(async (event) => {
-  await requireUserSession(event)
+export default defineRoleHandler(ALL_ROLES, async (event) => {
   const { waypoints, clearanceNm } = await readValidatedBody(event, landCheckSchema.parse)
   const legs = waypoints.slice(1).map((to, i) => ({ from: waypoints[i]!, to, method: to.method }))
   const checked = checkLegs(legs, clearanceNm).map(leg => ({

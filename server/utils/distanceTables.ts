@@ -4,7 +4,6 @@
 // larger ones by a job on the shared pg-boss queue, which any worker process may take.
 import type { Knex } from 'knex'
 import type { SessionUser } from '#shared/types/auth'
-import type { Role } from '#shared/types/auth'
 import {
   DEFAULT_TABLE_RADIUS_NM, IMMEDIATE_TABLE_PLACES,
   type DistanceMatrix, type DistanceTableCreateInput, type DistanceTableDetail, type DistanceTableSummary, type TablePlace, type TablePlan,
@@ -13,7 +12,6 @@ import { choosePlans, fillRows, pairCount, pairIndex, rowChunks } from '#shared/
 import { computeLegTable } from '#shared/utils/legTable'
 import { LAND_STEP_NM, geodesicCrossesLand } from './landCrossing'
 
-export const TABLE_BUILDERS = ['shore', 'admin'] as const satisfies readonly Role[]
 /** Share of the progress bar for the distance pass; the land pass takes the rest. */
 const DISTANCE_SHARE = 0.2
 /** Work between yields to the event loop (and progress writes), in milliseconds. */

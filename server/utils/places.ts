@@ -1,12 +1,7 @@
 import type { Knex } from 'knex'
 import { find as findTimeZones } from 'geo-tz'
-import type { Role, SessionUser } from '#shared/types/auth'
+import type { SessionUser } from '#shared/types/auth'
 import type { Place, PlaceListItem } from '#shared/types/place'
-
-/** Who keeps the place library and vessels' fuel data (product brief, roles). */
-export const SHORE_DESK = ['shore', 'admin'] as const satisfies readonly Role[]
-/** Who keeps users, particulars, crew lists and company settings. */
-export const ADMIN_ONLY = ['admin'] as const satisfies readonly Role[]
 
 const columns = ['id', 'name', 'kind', 'lat', 'lon', 'unlocode', 'time_zone as timeZone']
 

@@ -2,22 +2,23 @@
 // offers exactly the same steps: draft → submitted → approved, or submitted → returned → draft.
 import type { Role } from '../types/auth'
 import type { PlanStatus } from '../types/plan'
+import { BRIEF_SENDERS, EDITORS, REMARKERS, SIGNERS, type RoleSet } from './roles'
 
 export type SignoffStep = 'submit' | 'approve' | 'return'
 export type PlanAction = SignoffStep | 'revise' | 'brief' | 'remark'
 
-interface StepRule { from: readonly PlanStatus[], to: PlanStatus, roles: readonly Role[], vesselMasterOnly: boolean }
+interface StepRule { from: readonly PlanStatus[], to: PlanStatus, roles: RoleSet, vesselMasterOnly: boolean }
 
 export const SIGNOFF_STEPS: Record<SignoffStep, StepRule> = {
-  submit: { from: ['draft', 'returned'], to: 'submitted', roles: ['planner', 'master'], vesselMasterOnly: false },
-  approve: { from: ['submitted'], to: 'approved', roles: ['master'], vesselMasterOnly: true },
-  return: { from: ['submitted'], to: 'returned', roles: ['master'], vesselMasterOnly: true },
+  submit: { from: ['draft', 'returned'], to: 'submitted', roles: EDITORS, vesselMasterOnly: false },
+  approve: { from: ['submitted'], to: 'approved', roles: SIGNERS, vesselMasterOnly: true },
+  return: { from: ['submitted'], to: 'returned', roles: SIGNERS, vesselMasterOnly: true },
 }
 
 /** Who may start a revision of an approved plan, send the crew brief, add a remark. */
-export const REVISE_ROLES: readonly Role[] = ['planner', 'master']
-export const BRIEF_ROLES: readonly Role[] = ['planner', 'master', 'shore']
-export const REMARK_ROLES: readonly Role[] = ['planner', 'master', 'shore', 'admin']
+export const REVISE_ROLES: RoleSet = EDITORS
+export const BRIEF_ROLES: RoleSet = BRIEF_SENDERS
+export const REMARK_ROLES: RoleSet = REMARKERS
 
 export const REMARKS_MAX = 2000
 

@@ -1,4 +1,3 @@
-export default defineEventHandler(async (event) => {
-  const { user } = await requireUserSession(event)
+export default defineRoleHandler(ALL_ROLES, async (_event, user) => {
   return { user }
 })

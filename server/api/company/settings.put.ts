@@ -1,7 +1,6 @@
 import { companySettingsSchema } from '#shared/types/company'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, ADMIN_ONLY)
+export default defineRoleHandler(ADMIN_ONLY, async (event, user) => {
   const body = await readValidatedBody(event, companySettingsSchema.parse)
   return updateCompanySettings(user, body)
 })

@@ -3,8 +3,7 @@ import { RhumbPoleError } from '#shared/utils/rhumb'
 import type { DirectSolution } from '#shared/utils/solver'
 
 // Position after sailing a course for a distance, by geodesic or rhumb line.
-export default defineEventHandler(async (event) => {
-  await requireUserSession(event)
+export default defineRoleHandler(ALL_ROLES, async (event) => {
   const { from, course, distanceM, method } = await readValidatedBody(event, geodesyDirectSchema.parse)
   try {
     return directByMethod(from, course, distanceM, method) satisfies DirectSolution

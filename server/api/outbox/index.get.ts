@@ -1,4 +1,3 @@
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, ALL_ROLES)
+export default defineRoleHandler(ALL_ROLES, async (event, user) => {
   return listOutbox(user)
 })

@@ -3,8 +3,7 @@ import { placeImportModeSchema } from '#shared/types/place'
 const MAX_BYTES = 2_000_000
 
 /** CSV of places: `?mode=preview` lists rows and problems; `?mode=commit` imports when there are none. Body: the CSV text or a multipart file. */
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, SHORE_DESK)
+export default defineRoleHandler(SHORE_DESK, async (event, user) => {
   const { mode } = await getValidatedQuery(event, placeImportModeSchema.parse)
   let text: string | undefined
   if ((getRequestHeader(event, 'content-type') ?? '').startsWith('multipart/form-data')) {

@@ -1,7 +1,6 @@
 import { placeSchema } from '#shared/types/place'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, SHORE_DESK)
+export default defineRoleHandler(SHORE_DESK, async (event, user) => {
   const body = await readValidatedBody(event, placeSchema.parse)
   setResponseStatus(event, 201)
   return createPlace(user, body)

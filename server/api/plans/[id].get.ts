@@ -1,7 +1,6 @@
 import { idParamsSchema } from '#shared/types/plan'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, ALL_ROLES)
+export default defineRoleHandler(ALL_ROLES, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   return getPlanView(user, id)
 })

@@ -1,7 +1,6 @@
 // Route file import: `mode=preview` (default) shows what the file holds and creates nothing;
 // `mode=create` makes a draft plan from it, only when every waypoint was read.
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, EDITORS)
+export default defineRoleHandler(EDITORS, async (event, user) => {
   const upload = await readRouteUpload(event)
   const parsed = readRouteFileUpload(upload)
   if (upload.mode === 'preview') return previewRoute(parsed, upload.fields)

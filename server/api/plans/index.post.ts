@@ -1,7 +1,6 @@
 import { planCreateSchema } from '#shared/types/plan'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, EDITORS)
+export default defineRoleHandler(EDITORS, async (event, user) => {
   const input = await readValidatedBody(event, planCreateSchema.parse)
   setResponseStatus(event, 201)
   return createPlan(user, input)

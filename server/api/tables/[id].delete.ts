@@ -1,7 +1,6 @@
 import { distanceTableParamsSchema } from '#shared/types/distanceTable'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, TABLE_BUILDERS)
+export default defineRoleHandler(TABLE_BUILDERS, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, distanceTableParamsSchema.parse)
   await deleteTable(user, id)
   setResponseStatus(event, 204)

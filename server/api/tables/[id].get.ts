@@ -1,7 +1,6 @@
 import { distanceTableParamsSchema } from '#shared/types/distanceTable'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, ALL_ROLES)
+export default defineRoleHandler(ALL_ROLES, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, distanceTableParamsSchema.parse)
   return getTable(user, id)
 })

@@ -1,4 +1,3 @@
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, ADMIN_ONLY)
+export default defineRoleHandler(ADMIN_ONLY, async (event, user) => {
   return listCompanyUsers(user)
 })

@@ -1,7 +1,6 @@
 import { userCreateSchema } from '#shared/types/adminUser'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, ADMIN_ONLY)
+export default defineRoleHandler(ADMIN_ONLY, async (event, user) => {
   const body = await readValidatedBody(event, userCreateSchema.parse)
   setResponseStatus(event, 201)
   return createCompanyUser(user, body)

@@ -2,8 +2,7 @@ import { idParamsSchema } from '#shared/types/plan'
 import { signoffStepSchema } from '#shared/types/signoff'
 import { SIGNOFF_STEPS } from '#shared/utils/signoffRules'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, SIGNOFF_STEPS.approve.roles)
+export default defineRoleHandler(SIGNOFF_STEPS.approve.roles, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   const body = await readValidatedBody(event, signoffStepSchema.parse)
   return approvePlan(user, id, body?.version)

@@ -1,8 +1,7 @@
 import { idParamsSchema } from '#shared/types/plan'
 import { BRIEF_ROLES } from '#shared/utils/signoffRules'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, BRIEF_ROLES)
+export default defineRoleHandler(BRIEF_ROLES, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   const queued = await queueCrewBrief(user, id)
   setResponseStatus(event, 202)

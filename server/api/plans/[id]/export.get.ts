@@ -1,8 +1,7 @@
 import { idParamsSchema } from '#shared/types/plan'
 import { routeExportQuerySchema } from '#shared/types/routeFile'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, ALL_ROLES)
+export default defineRoleHandler(ALL_ROLES, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   const { format } = await getValidatedQuery(event, routeExportQuerySchema.parse)
   const file = await exportPlanRoute(user, id, format)

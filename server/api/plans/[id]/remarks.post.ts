@@ -2,8 +2,7 @@ import { idParamsSchema } from '#shared/types/plan'
 import { remarkSchema } from '#shared/types/signoff'
 import { REMARK_ROLES } from '#shared/utils/signoffRules'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, REMARK_ROLES)
+export default defineRoleHandler(REMARK_ROLES, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   const { remarks } = await readValidatedBody(event, remarkSchema.parse)
   setResponseStatus(event, 201)

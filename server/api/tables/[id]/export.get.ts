@@ -1,7 +1,6 @@
 import { distanceTableParamsSchema } from '#shared/types/distanceTable'
 
-export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, ALL_ROLES)
+export default defineRoleHandler(ALL_ROLES, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, distanceTableParamsSchema.parse)
   const table = await getTable(user, id)
   if (table.status !== 'ready' || !table.matrix) throw createError({ statusCode: 409, statusMessage: 'The table is not built yet' })
