@@ -4,22 +4,11 @@ const tablePath = (id: number): string => `/api/tables/${id}`
 
 /** Writes on distance tables; each refreshes the saved list (and the open table). */
 export function useDistanceTableActions() {
-  const busy = ref(false)
-  const error = ref<any>(null)
-  async function run<T>(fn: () => Promise<T>): Promise<T | undefined> {
-    busy.value = true
-    error.value = null
-    try {
-      const result = await fn()
-      await refreshNuxtData('tables')
-      return result
-    }
-    catch (e) { error.value = e }
-    finally { busy.value = false }
-  }
+  const { busy, failure, run } = useWrite({ refresh: 'tables' })
   return {
-    busy: readonly(busy),
-    error: readonly(error),
+    busy,
+    /** The raw error, for `AppError` to show with its status code. */
+    error: failure,
     build: (input: DistanceTableCreateInput) => run(() => $fetch<DistanceTableDetail>('/api/tables', { method: 'POST', body: input })),
     rebuild: (id: number) => run(() => $fetch<DistanceTableDetail>(`/api/tables/${id}/rebuild`, { method: 'POST' })),
     // A plain string path: matching the typed route of a DELETE overflows the type checker.

@@ -4,27 +4,15 @@ type PostAction = Exclude<PlanAction, 'remark'> | 'remarks'
 
 /**
  * Sign-off steps, revisions, the crew brief and remarks for one plan: POST, then refresh the
- * plan's data. `error` holds the server's message for the panel to show.
+ * plan's data. `busy` names the step running; `error` holds the server's message for the panel.
  */
 export function usePlanActions(id: MaybeRefOrGetter<number>) {
-  const busy = ref<PostAction | null>(null)
-  const error = ref<string | null>(null)
+  const writer = useWrite({ refresh: () => `plan-${toValue(id)}` })
   const notice = ref<string | null>(null)
 
-  async function post<T>(action: PostAction, body?: Record<string, unknown>): Promise<T | null> {
-    busy.value = action
-    error.value = null
+  function post<T>(action: PostAction, body?: Record<string, unknown>): Promise<T | null> {
     notice.value = null
-    try {
-      const result = await $fetch(`/api/plans/${toValue(id)}/${action}`, { method: 'POST', body }) as unknown as T
-      await refreshNuxtData(`plan-${toValue(id)}`)
-      return result
-    }
-    catch (e: any) {
-      error.value = e?.data?.message ?? e?.message ?? 'The request failed'
-      return null
-    }
-    finally { busy.value = null }
+    return writer.write<T>(`/api/plans/${toValue(id)}/${action}`, 'POST', body, { label: action })
   }
 
   const submit = (version?: number) => post('submit', { version })
@@ -45,5 +33,5 @@ export function usePlanActions(id: MaybeRefOrGetter<number>) {
     return queued
   }
 
-  return { busy: readonly(busy), error: readonly(error), notice: readonly(notice), submit, approve, returnWithRemarks, addRemark, revise, sendBrief }
+  return { busy: writer.pending as Readonly<Ref<PostAction | null>>, error: readonly(writer.error), notice: readonly(notice), submit, approve, returnWithRemarks, addRemark, revise, sendBrief }
 }

@@ -27,8 +27,7 @@ function describeChanges(mine: { header: Record<string, unknown>, waypoints: Way
 /** Saves the draft (header, then waypoints) under the plan's version; a stale version becomes a conflict to resolve. */
 export function usePlanSave() {
   const store = usePlanDraftStore()
-  const saving = ref(false)
-  const error = ref<string | null>(null)
+  const { busy: saving, error, failure, run } = useWrite({ fallback: 'Saving failed' })
   const conflict = shallowRef<PlanConflict | null>(null)
 
   async function put() {
@@ -45,22 +44,17 @@ export function usePlanSave() {
     if (store.waypointsDirty || !view)
       view = await $fetch<PlanViewResponse>(`/api/plans/${id}/waypoints`, { method: 'PUT', body: { version: store.version, waypoints: store.waypoints } })
     store.markSaved(view)
+    return view
   }
 
   async function save() {
     if (store.hasCellErrors) { error.value = 'Correct the marked cells before saving.'; return }
-    saving.value = true
-    error.value = null
     const base = store.version
-    try { await put(); conflict.value = null }
-    catch (e: any) {
-      if (e?.statusCode === 409 && e?.data?.data?.currentVersion !== undefined) {
-        const theirs = await $fetch<PlanViewResponse>(`/api/plans/${store.planId}`)
-        conflict.value = { theirs, myBaseVersion: base, changes: describeChanges({ header: { ...store.header }, waypoints: store.waypoints }, theirs, base) }
-      }
-      else error.value = e?.data?.message || e?.message || 'Saving failed'
-    }
-    finally { saving.value = false }
+    if (await run(put)) { conflict.value = null; return }
+    const stale = failure.value?.statusCode === 409 && failure.value?.data?.data?.currentVersion !== undefined
+    if (!stale) return
+    const theirs = await run(() => $fetch<PlanViewResponse>(`/api/plans/${store.planId}`))
+    if (theirs) conflict.value = { theirs, myBaseVersion: base, changes: describeChanges({ header: { ...store.header }, waypoints: store.waypoints }, theirs, base) }
   }
 
   function reloadTheirs() {

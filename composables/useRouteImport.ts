@@ -17,8 +17,7 @@ export interface RouteImportFailure { message: string, issue?: RouteImportIssue,
 const MAX_FILE_BYTES = 2 * 1024 * 1024
 
 function failureOf(e: any, fallback: string): RouteImportFailure {
-  const body = e?.data
-  return { message: body?.message || fallback, issue: body?.data?.issue, errors: body?.data?.errors }
+  return { message: errorMessage(e, fallback), issue: e?.data?.data?.issue, errors: e?.data?.data?.errors }
 }
 
 export function useRouteImport() {
@@ -26,7 +25,7 @@ export function useRouteImport() {
   const preview = shallowRef<RouteImportPreview | null>(null)
   const failure = ref<RouteImportFailure | null>(null)
   const fieldErrors = ref<Record<string, string>>({})
-  const busy = ref(false)
+  const { busy, failure: cause, run } = useWrite({ refresh: 'plans' })
 
   function formFor(fields: Record<string, string>) {
     const body = new FormData()
@@ -43,10 +42,8 @@ export function useRouteImport() {
       failure.value = { message: `The file is ${(selected.size / 1048576).toFixed(1)} MB; route files may be at most 2 MB` }
       return
     }
-    busy.value = true
-    try { preview.value = await $fetch<RouteImportPreview>('/api/plans/import', { method: 'POST', body: formFor({ mode: 'preview' }) }) }
-    catch (e) { failure.value = failureOf(e, 'The file could not be read') }
-    finally { busy.value = false }
+    preview.value = await run(() => $fetch<RouteImportPreview>('/api/plans/import', { method: 'POST', body: formFor({ mode: 'preview' }) }), { refresh: [] })
+    if (!preview.value) failure.value = failureOf(cause.value, 'The file could not be read')
   }
 
   /** Checks the header with the same schema as the server, then creates the draft and opens it. */
@@ -54,17 +51,12 @@ export function useRouteImport() {
     const checked = planCreateSchema.safeParse(header)
     fieldErrors.value = Object.fromEntries(checked.error?.issues.map(i => [String(i.path[0]), i.message]) ?? [])
     if (!checked.success || !file.value) return
-    busy.value = true
     failure.value = null
-    try {
-      const fields = { mode: 'create', vesselId: String(checked.data.vesselId), title: checked.data.title, departureUtc: checked.data.departureUtc, speedKn: String(checked.data.speedKn) }
-      const { id } = await $fetch<{ id: number }>('/api/plans/import', { method: 'POST', body: formFor(fields) })
-      await refreshNuxtData('plans')
-      await navigateTo(`/plans/${id}`)
-    }
-    catch (e) { failure.value = failureOf(e, 'The draft could not be created') }
-    finally { busy.value = false }
+    const fields = { mode: 'create', vesselId: String(checked.data.vesselId), title: checked.data.title, departureUtc: checked.data.departureUtc, speedKn: String(checked.data.speedKn) }
+    const created = await run(() => $fetch<{ id: number }>('/api/plans/import', { method: 'POST', body: formFor(fields) }))
+    if (created) await navigateTo(`/plans/${created.id}`)
+    else failure.value = failureOf(cause.value, 'The draft could not be created')
   }
 
-  return { file, preview, failure, fieldErrors: readonly(fieldErrors), busy: readonly(busy), load, create }
+  return { file, preview, failure, fieldErrors: readonly(fieldErrors), busy, load, create }
 }
