@@ -9,6 +9,9 @@ import { computeLegTable } from '../shared/utils/legTable'
 import type { LegTableWaypoint } from '../shared/utils/legTable'
 import { densifyRoute } from '../shared/utils/track'
 import { seededRandom } from '../tests/unit/support/random'
+import { prepareZones } from '../shared/utils/zones/prepare'
+import { planZoneDistances } from '../shared/utils/zones/legZones'
+import { ecaZones } from '../db/seeds/ecaZones'
 
 const G = geodesic.Geodesic
 const raw = G.WGS84
@@ -66,6 +69,33 @@ const rawTable = () => {
   }
 }
 
+// Zones: the seeded ECAs; the random plan above, and a 500-waypoint plan laid through five ECAs
+// (Baltic, North Sea, Channel, North American, Gulf of Mexico), where most legs meet a boundary box.
+const zones = prepareZones(ecaZones.map((z, i) => ({ id: i + 1, name: z.name, kind: z.kind, polygons: z.polygons })))
+const anchors: [number, number][] = [[60.0, 26.0], [59.5, 21.0], [57.0, 19.5], [55.3, 14.5], [54.6, 11.5], [57.3, 11.5], [57.9, 10.0], [57.5, 7.0],
+  [54.0, 4.0], [51.5, 2.0], [50.5, 0.0], [49.9, -2.6], [49.7, -6.7], [46.0, -30.0], [44.0, -50.0], [40.4, -69.0], [40.4, -73.8], [36.0, -75.0],
+  [32.0, -79.0], [27.0, -79.8], [24.3, -81.5], [25.5, -85.0], [28.5, -89.0]]
+const ecaPlan: LegTableWaypoint[] = []
+{
+  const lens = anchors.slice(1).map((p, i) => raw.Inverse(anchors[i]![0], anchors[i]![1], p[0], p[1]).s12!)
+  const total = lens.reduce((a, b) => a + b, 0)
+  for (let i = 0; i < lens.length; i++) {
+    const line = raw.InverseLine(anchors[i]![0], anchors[i]![1], anchors[i + 1]![0], anchors[i + 1]![1], G.LATITUDE | G.LONGITUDE | G.DISTANCE_IN)
+    const n = Math.max(1, Math.round(499 * lens[i]! / total))
+    for (let k = 0; k < n; k++) {
+      const p = line.Position(line.s13 * k / n, G.LATITUDE | G.LONGITUDE)
+      ecaPlan.push({ name: `E${ecaPlan.length + 1}`, lat: p.lat2!, lon: p.lon2!, method: ecaPlan.length % 2 ? 'geodesic' : 'rhumb' })
+    }
+  }
+  ecaPlan.push({ name: 'End', lat: anchors.at(-1)![0], lon: anchors.at(-1)![1], method: 'rhumb' })
+}
+const randomLegs = computeLegTable(plan, '2026-06-01T00:00:00Z', 14).legs
+const ecaLegs = computeLegTable(ecaPlan, '2026-06-01T00:00:00Z', 14).legs
+const [tZonesRandom, tLegsRandom] = sideBySide(() => { sink += planZoneDistances(zones, randomLegs).legs.length }, () => { sink += computeLegTable(plan, '2026-06-01T00:00:00Z', 14).legs.length }, ROUNDS * 3)
+const [tZonesEca, tLegsEca] = sideBySide(() => { sink += planZoneDistances(zones, ecaLegs).legs.length }, () => { sink += computeLegTable(ecaPlan, '2026-06-01T00:00:00Z', 14).legs.length }, ROUNDS * 3)
+const [tPrepare] = sideBySide(() => { sink += prepareZones(ecaZones.map((z, i) => ({ id: i + 1, name: z.name, kind: z.kind, polygons: z.polygons }))).edges.length }, () => {}, ROUNDS)
+const ecaNm = planZoneDistances(zones, ecaLegs).totals.byKind.find(k => k.kind === 'eca')!.distanceNm
+
 const rate = (ms: number) => `${Math.round((N - 1) / ms * 1000).toLocaleString('en-GB').padStart(10)} /s`
 const [tEngine, tRaw] = sideBySide(engineInverse, rawInverse)
 const [tRhumb, tRaw2] = sideBySide(engineRhumb, rawInverse)
@@ -78,4 +108,7 @@ console.log(`  geodesic inverse   engine ${rate(tEngine)}   raw geographiclib ${
 console.log(`  rhumb inverse      engine ${rate(tRhumb)}   raw geodesic      ${rate(tRaw2)}   ratio ${(tRaw2 / tRhumb).toFixed(2)}×  (goal ≥ 1.00×)`)
 console.log(`  500-waypoint plan  leg table + ${STEP_NM}-nm track (${trackPoints} points) ${tTable.toFixed(2)} ms   raw calls ${tRawTable.toFixed(2)} ms   ratio ${(tTable / tRawTable).toFixed(2)}×  (goal ≤ 2.00×)`)
 console.log(`  leg table alone    500 waypoints ${tLegs.toFixed(2)} ms (one frame at 60 Hz is 16.7 ms)`)
+console.log(`  zones, random plan per-leg zone distances ${tZonesRandom.toFixed(2)} ms   leg table alone ${tLegsRandom.toFixed(2)} ms   ratio ${(tZonesRandom / tLegsRandom).toFixed(2)}×  (goal ≤ 1.50×)`)
+console.log(`  zones, ECA plan    per-leg zone distances ${tZonesEca.toFixed(2)} ms   leg table alone ${tLegsEca.toFixed(2)} ms   ratio ${(tZonesEca / tLegsEca).toFixed(2)}×  (goal ≤ 1.50×; ${ecaLegs.length} legs, ${ecaNm.toFixed(0)} nm inside ECAs)`)
+console.log(`  zones, preparing the ${zones.zones.length} seeded ECAs (${zones.edges.length} sub-edges, once per change of zones) ${tPrepare.toFixed(2)} ms`)
 if (Number.isNaN(sink)) console.log('')
