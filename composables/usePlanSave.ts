@@ -1,16 +1,14 @@
-import type { PlanDetail } from '#shared/types/plan'
+import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
-
-export interface PlanViewResponse { plan: PlanDetail, waypoints: Waypoint[] }
 
 /** What differs between the draft and the plan someone else saved meanwhile. */
 export interface PlanConflict {
-  theirs: PlanViewResponse
+  theirs: PlanView
   myBaseVersion: number
   changes: string[]
 }
 
-function describeChanges(mine: { header: Record<string, unknown>, waypoints: Waypoint[] }, theirs: PlanViewResponse, baseVersion: number): string[] {
+function describeChanges(mine: { header: Record<string, unknown>, waypoints: Waypoint[] }, theirs: PlanView, baseVersion: number): string[] {
   const out = [`The server has version ${theirs.plan.version}; your draft started from version ${baseVersion}.`]
   if (theirs.plan.status !== 'draft') out.push(`The plan is now ${theirs.plan.status}.`)
   const a = mine.waypoints
@@ -32,17 +30,17 @@ export function usePlanSave() {
 
   async function put() {
     const id = store.planId!
-    let view: PlanViewResponse | null = null
+    let view: PlanView | null = null
     if (store.headerDirty) {
       const h = store.header
-      view = await $fetch<PlanViewResponse>(`/api/plans/${id}`, {
+      view = await $fetch<PlanView>(`/api/plans/${id}`, {
         method: 'PUT',
         body: { version: store.version, title: h.title, departureUtc: h.departureUtc, speedKn: h.speedKn, limitLat: h.limitLat, departurePlaceId: h.departurePlaceId, arrivalPlaceId: h.arrivalPlaceId },
       })
       store.version = view.plan.version
     }
     if (store.waypointsDirty || !view)
-      view = await $fetch<PlanViewResponse>(`/api/plans/${id}/waypoints`, { method: 'PUT', body: { version: store.version, waypoints: store.waypoints } })
+      view = await $fetch<PlanView>(`/api/plans/${id}/waypoints`, { method: 'PUT', body: { version: store.version, waypoints: store.waypoints } })
     store.markSaved(view)
     return view
   }
@@ -53,7 +51,7 @@ export function usePlanSave() {
     if (await run(put)) { conflict.value = null; return }
     const stale = failure.value?.statusCode === 409 && failure.value?.data?.data?.currentVersion !== undefined
     if (!stale) return
-    const theirs = await run(() => $fetch<PlanViewResponse>(`/api/plans/${store.planId}`))
+    const theirs = await run(() => $fetch<PlanView>(`/api/plans/${store.planId}`))
     if (theirs) conflict.value = { theirs, myBaseVersion: base, changes: describeChanges({ header: { ...store.header }, waypoints: store.waypoints }, theirs, base) }
   }
 

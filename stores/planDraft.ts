@@ -1,5 +1,6 @@
 import type { LandCheckResult } from '#shared/types/landCheck'
 import type { PlanDetail } from '#shared/types/plan'
+import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
 import { computeLegTable } from '#shared/utils/legTable'
 
@@ -11,11 +12,6 @@ export interface PlanHeaderDraft {
   limitLat: number | null
   departurePlaceId: number | null
   arrivalPlaceId: number | null
-}
-
-export interface PlanView {
-  plan: PlanDetail
-  waypoints: Waypoint[]
 }
 
 /** What the planner is editing: the header and waypoints of one plan, with undo until saved. */

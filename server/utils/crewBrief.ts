@@ -1,13 +1,13 @@
 // The crew brief (capability 7): a plan summary for the vessel's crew list, as plain text and
 // HTML from the same rows. Approval is stated first and prominently; a plan not yet approved says so.
 import type { SessionUser } from '#shared/types/auth'
+import type { PlanView } from '#shared/types/planView'
 import type { PlanLeg } from '#shared/utils/legTable'
 import { ALL_CAUTIONS } from '#shared/utils/cautions'
 import { formatInZone, formatUtc } from '#shared/utils/timeFormat'
 import { formatZoneDescription, zoneTime } from '#shared/utils/manoeuvre'
 import { formatPosition } from '#shared/utils/position'
 
-type PlanView = Awaited<ReturnType<typeof getPlanView>>
 export interface BriefVessel { name: string, imoNumber: string, callSign: string }
 export interface CrewBrief { subject: string, text: string, html: string }
 

@@ -1,14 +1,7 @@
 import type { FuelReserve } from '#shared/types/fuel'
+import type { PlanFuel } from '#shared/types/planView'
 import { fitFuelCurve, planFuel, type FuelCurve } from '#shared/utils/fuel'
 
-export interface PlanFuel {
-  curve: FuelCurve
-  legTonnes: number[]
-  totalTonnes: number
-  reserve: FuelReserve
-  reserveTonnes: number
-  withReserveTonnes: number
-}
 
 /**
  * Fuel per leg and for the plan from the vessel's fitted curve and the company's reserve margin;

@@ -1,6 +1,7 @@
 import type { Knex } from 'knex'
 import type { SessionUser } from '#shared/types/auth'
 import type { PlanCreateInput, PlanDetail, PlanEvent, PlanHeaderInput, PlanSummary } from '#shared/types/plan'
+import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
 import { computeLegTable } from '#shared/utils/legTable'
 
@@ -62,7 +63,7 @@ export function legTableFor(plan: Pick<PlanDetail, 'departureUtc' | 'speedKn'>, 
   return computeLegTable(waypoints, plan.departureUtc, plan.speedKn, { helmDelayS })
 }
 
-export async function getPlanView(user: SessionUser, id: number) {
+export async function getPlanView(user: SessionUser, id: number): Promise<PlanView> {
   const plan = await findPlan(user, id)
   const waypoints = await loadWaypoints(id)
   const { legs, totals } = legTableFor(plan, waypoints)
