@@ -1,10 +1,11 @@
 import { z } from 'zod'
 import { roleSchema } from './auth'
+import { emailSchema } from './fields'
 
 /** A new user of the company, created by its admin. */
 export const userCreateSchema = z.object({
   name: z.string({ error: 'name is required' }).trim().min(1, 'name is required').max(120, 'name is at most 120 characters'),
-  email: z.string({ error: 'email is required' }).trim().toLowerCase().email('email must be an e-mail address').max(254),
+  email: emailSchema,
   role: z.enum(roleSchema.options, { error: 'role must be planner, master, shore or admin' }),
   password: z.string({ error: 'password is required' }).min(10, 'password must be at least 10 characters').max(200, 'password is at most 200 characters'),
 })

@@ -1,11 +1,12 @@
 import { z } from 'zod'
+import { emailSchema } from './fields'
 
 export const roles = ['planner', 'master', 'shore', 'admin'] as const
 export const roleSchema = z.enum(roles)
 export type Role = z.infer<typeof roleSchema>
 
 export const loginSchema = z.object({
-  email: z.string({ error: 'email is required' }).trim().toLowerCase().email('email must be an e-mail address').max(254),
+  email: emailSchema,
   password: z.string({ error: 'password is required' }).min(1, 'password is required').max(200),
 })
 export type LoginInput = z.infer<typeof loginSchema>

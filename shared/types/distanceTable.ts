@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { idSchema } from './fields'
 
 export const DEFAULT_TABLE_RADIUS_NM = 30
 /** Tables up to this many places are built inside the request; larger ones go to the job queue. */
@@ -7,14 +8,12 @@ export const MAX_TABLE_PLACES = 300
 
 export const distanceTableCreateSchema = z.object({
   name: z.string({ error: 'name is required' }).trim().min(1, 'name is required').max(120, 'name is at most 120 characters'),
-  placeIds: z.array(z.number().int().positive(), { error: 'placeIds must be a list of place ids' })
+  placeIds: z.array(idSchema, { error: 'must be a list of place ids' })
     .min(2, 'choose at least 2 places').max(MAX_TABLE_PLACES, `choose at most ${MAX_TABLE_PLACES} places`)
     .refine(ids => new Set(ids).size === ids.length, 'a place is chosen twice'),
   radiusNm: z.number({ error: 'radiusNm must be a number' }).finite().positive('radiusNm must be greater than 0').max(500, 'radiusNm is at most 500').optional(),
 })
 export type DistanceTableCreateInput = z.infer<typeof distanceTableCreateSchema>
-
-export const distanceTableParamsSchema = z.object({ id: z.coerce.number().int().positive() })
 
 export type DistanceTableStatus = 'building' | 'ready' | 'failed'
 

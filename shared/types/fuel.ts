@@ -1,11 +1,10 @@
 import { z } from 'zod'
+import { speedKnSchema, tonnesPerDaySchema } from './fields'
 
 /** One measured consumption: tonnes per day at a steady speed through the water. */
 export const fuelPointSchema = z.object({
-  speedKn: z.number({ error: 'speedKn must be a number' }).finite('speedKn must be a finite number')
-    .gt(0, 'speedKn must be greater than 0').max(60, 'speedKn is at most 60'),
-  tonnesPerDay: z.number({ error: 'tonnesPerDay must be a number' }).finite('tonnesPerDay must be a finite number')
-    .gt(0, 'tonnesPerDay must be greater than 0').max(2000, 'tonnesPerDay is at most 2000'),
+  speedKn: speedKnSchema,
+  tonnesPerDay: tonnesPerDaySchema,
 })
 export type FuelPoint = z.infer<typeof fuelPointSchema>
 
@@ -32,7 +31,7 @@ export const fuelReserveSchema = z.discriminatedUnion('kind', [
   z.object({
     kind: z.literal('days'),
     value: z.number({ error: 'value must be a number' }).finite().min(0, 'value (days) must not be negative').max(60, 'value (days) is at most 60'),
-    speedKn: z.number({ error: 'speedKn must be a number' }).finite().gt(0, 'speedKn must be greater than 0').max(60, 'speedKn is at most 60'),
+    speedKn: speedKnSchema,
   }),
 ], { error: 'kind must be "percent" or "days"' })
 export type FuelReserve = z.infer<typeof fuelReserveSchema>

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { latSchema, lonSchema, numberTextSchema } from './fields'
 import { normaliseLongitude, parseLatitude, parseLongitude } from '../utils/position'
 
 export const placeKinds = ['port', 'pilot_station', 'canal_approach', 'strait', 'anchorage', 'ocean_position'] as const
@@ -86,7 +87,4 @@ export interface PlaceImportResult {
   imported: number
 }
 
-export const timeZoneQuerySchema = z.object({
-  lat: z.coerce.number({ error: 'lat must be a number' }).finite().min(-90, 'lat must be between -90 and 90').max(90, 'lat must be between -90 and 90'),
-  lon: z.coerce.number({ error: 'lon must be a number' }).finite().min(-180, 'lon must be between -180 and 180').max(180, 'lon must be between -180 and 180'),
-})
+export const timeZoneQuerySchema = z.object({ lat: numberTextSchema(latSchema), lon: numberTextSchema(lonSchema) })

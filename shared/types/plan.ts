@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { latitudeSchema } from './geo'
+import { dateTimeUtcSchema, idSchema, latSchema, speedKnSchema, versionSchema } from './fields'
 import { waypointListSchema } from './waypoint'
 
 export const planStatuses = ['draft', 'submitted', 'approved', 'returned'] as const
@@ -21,27 +21,25 @@ export interface PlanSummary {
   updatedAt: string
 }
 
-export const idParamsSchema = z.object({ id: z.coerce.number({ error: 'id must be a number' }).int('id must be a whole number').positive('id must be positive').max(2_147_483_647, 'id is too large') })
-
 export const planCreateSchema = z.object({
-  vesselId: z.number({ error: 'vesselId must be a number' }).int().positive(),
+  vesselId: idSchema,
   title: z.string({ error: 'title is required' }).trim().min(3, 'title needs at least 3 characters').max(160, 'title is at most 160 characters'),
-  departureUtc: z.iso.datetime({ offset: true, error: 'departureUtc must be an ISO 8601 date and time' }),
-  speedKn: z.number({ error: 'speedKn must be a number' }).finite().gt(0, 'speedKn must be greater than 0').max(60, 'speedKn is at most 60'),
-  limitLat: latitudeSchema.refine(v => v > 0 && v < 90, 'limitLat must be between 0 and 90 (applies north and south)').nullable().optional(),
-  departurePlaceId: z.number().int().positive().nullable().optional(),
-  arrivalPlaceId: z.number().int().positive().nullable().optional(),
+  departureUtc: dateTimeUtcSchema,
+  speedKn: speedKnSchema,
+  limitLat: latSchema.refine(v => v > 0 && v < 90, 'must be between 0 and 90 (applies north and south)').nullable().optional(),
+  departurePlaceId: idSchema.nullable().optional(),
+  arrivalPlaceId: idSchema.nullable().optional(),
 })
 export type PlanCreateInput = z.infer<typeof planCreateSchema>
 
 export const waypointsPutSchema = z.object({
-  version: z.number({ error: 'version must be a number' }).int('version must be a whole number').positive('version must be positive'),
+  version: versionSchema,
   waypoints: waypointListSchema,
 })
 export type WaypointsPutInput = z.input<typeof waypointsPutSchema>
 
 export const planHeaderSchema = planCreateSchema.omit({ vesselId: true }).extend({
-  version: z.number({ error: 'version must be a number' }).int().positive(),
+  version: versionSchema,
 })
 export type PlanHeaderInput = z.infer<typeof planHeaderSchema>
 

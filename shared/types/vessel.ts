@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { imoNumberSchema } from './imo'
+import { emailSchema, idSchema, speedKnSchema } from './fields'
 import { fuelPointsSchema, type FuelPoint } from './fuel'
 import type { FuelCurve } from '../utils/fuel'
 
@@ -9,15 +10,15 @@ export const vesselUpdateSchema = z.object({
   imoNumber: imoNumberSchema,
   callSign: z.string({ error: 'callSign is required' }).trim().toUpperCase().min(3, 'callSign is 3 to 12 letters and digits')
     .max(12, 'callSign is 3 to 12 letters and digits').regex(/^[A-Z0-9]+$/, 'callSign is letters and digits only'),
-  serviceSpeedKn: z.number({ error: 'serviceSpeedKn must be a number' }).finite().gt(0, 'serviceSpeedKn must be greater than 0').max(60, 'serviceSpeedKn is at most 60'),
-  masterUserId: z.number({ error: 'masterUserId must be a user id or null' }).int().positive().nullable(),
+  serviceSpeedKn: speedKnSchema,
+  masterUserId: idSchema.nullable(),
 })
 export type VesselUpdateInput = z.infer<typeof vesselUpdateSchema>
 
 export const crewMemberSchema = z.object({
   name: z.string({ error: 'name is required' }).trim().min(1, 'name is required').max(120, 'name is at most 120 characters'),
   rank: z.string({ error: 'rank is required' }).trim().min(1, 'rank is required').max(60, 'rank is at most 60 characters'),
-  email: z.string({ error: 'email is required' }).trim().toLowerCase().email('email must be an e-mail address').max(254),
+  email: emailSchema,
 })
 export type CrewMember = z.infer<typeof crewMemberSchema>
 

@@ -1,18 +1,19 @@
 import { z } from 'zod'
-import { latitudeSchema, legMethodSchema, longitudeSchema } from './geo'
+import { legMethodSchema } from './geo'
+import { latSchema, lonSchema, speedKnSchema, turnRadiusNmSchema, xteNmSchema } from './fields'
 
 export const MAX_WAYPOINTS = 5000
 
 /** One waypoint as stored and sent over the API. */
 export const waypointSchema = z.object({
   name: z.string().trim().max(80, 'at most 80 characters').default(''),
-  lat: latitudeSchema,
-  lon: longitudeSchema,
+  lat: latSchema,
+  lon: lonSchema,
   // Method, speed, XTE and turn radius belong to the leg arriving at this waypoint (ignored on the first).
   method: legMethodSchema.default('rhumb'),
-  speedKn: z.number().finite().gt(0, 'must be greater than 0').max(60, 'at most 60 kn').nullable().optional(),
-  xteNm: z.number().finite().gt(0, 'must be greater than 0').max(100, 'at most 100 nm').nullable().optional(),
-  turnRadiusNm: z.number().finite().gt(0, 'must be greater than 0').max(20, 'at most 20 nm').nullable().optional(),
+  speedKn: speedKnSchema.nullable().optional(),
+  xteNm: xteNmSchema.nullable().optional(),
+  turnRadiusNm: turnRadiusNmSchema.nullable().optional(),
   notes: z.string().max(500, 'at most 500 characters').nullable().optional(),
 })
 export type WaypointInput = z.input<typeof waypointSchema>

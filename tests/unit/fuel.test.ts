@@ -122,10 +122,12 @@ describe('fuel schemas', () => {
       return result.error!.issues.map(i => `${i.path.join('.')}: ${i.message}`)
     }
     expect(messages([{ speedKn: 12, tonnesPerDay: 19 }])).toEqual([': fuel data needs at least 2 points (speedKn and tonnesPerDay) to fit a curve'])
-    expect(messages([{ speedKn: 0, tonnesPerDay: 19 }, { speedKn: 14, tonnesPerDay: 30 }])).toEqual(['0.speedKn: speedKn must be greater than 0'])
-    expect(messages([{ speedKn: 12, tonnesPerDay: -3 }, { speedKn: 14, tonnesPerDay: 30 }])).toEqual(['0.tonnesPerDay: tonnesPerDay must be greater than 0'])
+    expect(messages([{ speedKn: 0, tonnesPerDay: 19 }, { speedKn: 14, tonnesPerDay: 30 }])).toEqual(['0.speedKn: must be from 0.1 to 60 kn'])
+    expect(messages([{ speedKn: 12, tonnesPerDay: -3 }, { speedKn: 14, tonnesPerDay: 30 }])).toEqual(['0.tonnesPerDay: must be from 0.01 to 2000 t/day'])
     expect(messages([{ speedKn: 12, tonnesPerDay: 19 }, { speedKn: 12, tonnesPerDay: 20 }])).toEqual(['1.speedKn: speedKn 12 is given twice (points 1 and 2); give one consumption per speed'])
-    expect(messages([{ speedKn: '12', tonnesPerDay: 19 }, { speedKn: 14, tonnesPerDay: 30 }])).toEqual(['0.speedKn: speedKn must be a number'])
+    // speeds are stored to 0.01 kn (numeric(5,2)): 12.001 and 12.004 are the same stored speed
+    expect(messages([{ speedKn: 12.001, tonnesPerDay: 19 }, { speedKn: 12.004, tonnesPerDay: 20 }])).toEqual(['1.speedKn: speedKn 12 is given twice (points 1 and 2); give one consumption per speed'])
+    expect(messages([{ speedKn: '12', tonnesPerDay: 19 }, { speedKn: 14, tonnesPerDay: 30 }])).toEqual(['0.speedKn: must be a number'])
   })
 
   it('reserve: percent or days with a speed', () => {

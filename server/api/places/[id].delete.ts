@@ -1,9 +1,7 @@
-import { z } from 'zod'
-
-const params = z.object({ id: z.coerce.number().int().positive() })
+import { idParamsSchema } from '#shared/types/fields'
 
 export default defineRoleHandler(SHORE_DESK, async (event, user) => {
-  const { id } = await getValidatedRouterParams(event, params.parse)
+  const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   await deletePlace(user, id)
   setResponseStatus(event, 204)
   return null

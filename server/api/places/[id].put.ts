@@ -1,10 +1,8 @@
-import { z } from 'zod'
+import { idParamsSchema } from '#shared/types/fields'
 import { placeSchema } from '#shared/types/place'
 
-const params = z.object({ id: z.coerce.number().int().positive() })
-
 export default defineRoleHandler(SHORE_DESK, async (event, user) => {
-  const { id } = await getValidatedRouterParams(event, params.parse)
+  const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   const body = await readValidatedBody(event, placeSchema.parse)
   return updatePlace(user, id, body)
 })

@@ -1,6 +1,6 @@
-import { distanceTableParamsSchema } from '#shared/types/distanceTable'
+import { idParamsSchema } from '#shared/types/fields'
 
 export default defineRoleHandler(ALL_ROLES, async (event, user) => {
-  const { id } = await getValidatedRouterParams(event, distanceTableParamsSchema.parse)
+  const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   return getTable(user, id)
 })

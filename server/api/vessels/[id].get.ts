@@ -1,8 +1,6 @@
-import { z } from 'zod'
-
-const params = z.object({ id: z.coerce.number().int().positive() })
+import { idParamsSchema } from '#shared/types/fields'
 
 export default defineRoleHandler(ALL_ROLES, async (event, user) => {
-  const { id } = await getValidatedRouterParams(event, params.parse)
+  const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   return getVessel(user, id)
 })

@@ -1,4 +1,4 @@
-import { idParamsSchema } from '#shared/types/plan'
+import { idParamsSchema } from '#shared/types/fields'
 import { signoffStepSchema } from '#shared/types/signoff'
 import { SIGNOFF_STEPS } from '#shared/utils/signoffRules'
 

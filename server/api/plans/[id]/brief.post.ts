@@ -1,4 +1,4 @@
-import { idParamsSchema } from '#shared/types/plan'
+import { idParamsSchema } from '#shared/types/fields'
 import { BRIEF_ROLES } from '#shared/utils/signoffRules'
 
 export default defineRoleHandler(BRIEF_ROLES, async (event, user) => {

@@ -1,4 +1,4 @@
-import { idParamsSchema } from '#shared/types/plan'
+import { idParamsSchema } from '#shared/types/fields'
 import { routeExportQuerySchema } from '#shared/types/routeFile'
 
 export default defineRoleHandler(ALL_ROLES, async (event, user) => {

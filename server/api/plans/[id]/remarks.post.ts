@@ -1,4 +1,4 @@
-import { idParamsSchema } from '#shared/types/plan'
+import { idParamsSchema } from '#shared/types/fields'
 import { remarkSchema } from '#shared/types/signoff'
 import { REMARK_ROLES } from '#shared/utils/signoffRules'
 

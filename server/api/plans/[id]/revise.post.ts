@@ -1,4 +1,4 @@
-import { idParamsSchema } from '#shared/types/plan'
+import { idParamsSchema } from '#shared/types/fields'
 import { REVISE_ROLES } from '#shared/utils/signoffRules'
 
 export default defineRoleHandler(REVISE_ROLES, async (event, user) => {

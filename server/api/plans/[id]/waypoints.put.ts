@@ -1,4 +1,5 @@
-import { idParamsSchema, waypointsPutSchema } from '#shared/types/plan'
+import { idParamsSchema } from '#shared/types/fields'
+import { waypointsPutSchema } from '#shared/types/plan'
 
 export default defineRoleHandler(EDITORS, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
