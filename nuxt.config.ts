@@ -70,6 +70,8 @@ export default defineNuxtConfig({
     output: process.env.PW_OUTPUT_DIR ? { dir: process.env.PW_OUTPUT_DIR } : undefined,
   },
   typescript: { strict: true },
-  // Separate build folders let several builds run side by side (tests, benchmarks).
-  buildDir: process.env.PW_BUILD_DIR || undefined,
+  // Separate build folders let several builds run side by side (tests, benchmarks). Without one,
+  // always `.nuxt`: Nuxt 4 would otherwise build into node_modules/.cache when `.nuxt` exists
+  // (after `nuxi prepare` or `nuxt dev`), and the type check (tsconfig → .nuxt) would read stale types.
+  buildDir: process.env.PW_BUILD_DIR || '.nuxt',
 })
