@@ -4,6 +4,7 @@
 import type { LatLon, LegMethod } from '#shared/types/geo'
 import type { LandCheckLeg } from '#shared/types/landCheck'
 import { densifyLeg, unwrapLongitudes } from '#shared/utils/track'
+import { wrapLongitude } from '#shared/utils/position'
 import { geodesicDirect, geodesicInverse, geodesicVertex } from '#shared/utils/geodesic'
 import { greatEllipseDensify } from '#shared/utils/greatEllipse'
 import { rhumbInverse } from '#shared/utils/rhumb'
@@ -40,12 +41,11 @@ export interface ChartGeometryOptions {
 
 interface LegShape { track: LatLon[], rhumb: LatLon[] | null, corridor: LatLon[] | null, vertex: LatLon | null }
 
-const signedDiff = (a: number, b: number) => ((((a - b) % 360) + 540) % 360) - 180
 
 /** Shift a line by whole turns so that it starts at the given (unwrapped) longitude. */
 function anchorAt(points: LatLon[], lon: number): LatLon[] {
   const line = unwrapLongitudes(points)
-  const shift = lon + signedDiff(line[0]!.lon, lon) - line[0]!.lon
+  const shift = lon + wrapLongitude(line[0]!.lon - lon) - line[0]!.lon
   return shift === 0 ? line : line.map(p => ({ lat: p.lat, lon: p.lon + shift }))
 }
 
@@ -67,8 +67,8 @@ export function corridorRing(track: LatLon[], method: LegMethod, xteNm: number, 
     const left = geodesicDirect(p, normaliseCourse(course - 90), xteNm * NM_M)
     const right = geodesicDirect(p, normaliseCourse(course + 90), xteNm * NM_M)
     // Keep each offset within half a turn of its track point so the ring never spans the globe.
-    port.push({ lat: left.lat, lon: p.lon + signedDiff(left.lon, p.lon) })
-    starboard.push({ lat: right.lat, lon: p.lon + signedDiff(right.lon, p.lon) })
+    port.push({ lat: left.lat, lon: p.lon + wrapLongitude(left.lon - p.lon) })
+    starboard.push({ lat: right.lat, lon: p.lon + wrapLongitude(right.lon - p.lon) })
   }
   return [...port, ...starboard.reverse()]
 }
@@ -133,7 +133,7 @@ function assemble(waypoints: readonly ChartWaypoint[], shapes: LegShape[], optio
     const start = marks[i]!.lon
     if (s.rhumb) rhumbAlternatives.push(anchorAt(s.rhumb, start))
     if (s.corridor) corridors.push(anchorAt(s.corridor, start))
-    if (s.vertex) vertices.push({ legIndex: i, lat: s.vertex.lat, lon: start + signedDiff(s.vertex.lon, start) })
+    if (s.vertex) vertices.push({ legIndex: i, lat: s.vertex.lat, lon: start + wrapLongitude(s.vertex.lon - start) })
     if (options.greatEllipse) {
       try { greatEllipses.push(anchorAt(greatEllipseDensify(waypoints[i]!, waypoints[i + 1]!, options.stepNm ?? 10), start)) }
       catch { /* antipodal ends: no single great ellipse to draw */ }
@@ -170,7 +170,7 @@ export function landMarks(g: ChartGeometry, legs: readonly LandCheckLeg[] | unde
     const ref = g.waypoints[l.index]?.lon
     const p = l.crossesLand ? l.firstLandPoint : l.withinClearance ? l.closestCoastPoint : null
     if (ref == null || !p) continue
-    out.push({ legIndex: l.index, kind: l.crossesLand ? 'crossing' : 'near', closestNm: l.closestApproachNm, lat: p.lat, lon: ref + signedDiff(p.lon, ref) })
+    out.push({ legIndex: l.index, kind: l.crossesLand ? 'crossing' : 'near', closestNm: l.closestApproachNm, lat: p.lat, lon: ref + wrapLongitude(p.lon - ref) })
   }
   return out
 }

@@ -2,6 +2,7 @@
 // (Web Mercator, 256 px, zoom 1–8) laid out under the densified track, all in one SVG viewBox.
 import type { LatLon, LegMethod } from '#shared/types/geo'
 import { densifyRoute, unwrapLongitudes } from '#shared/utils/track'
+import { wrapLongitude } from '#shared/utils/position'
 
 const TILE = 256
 const MAX_LAT = 85.0511287798066
@@ -28,7 +29,7 @@ function labelStep(z: number, scale: number) {
 }
 
 function labelFor(value: number, axis: 'lat' | 'lon') {
-  const v = axis === 'lon' ? ((((value + 180) % 360) + 360) % 360) - 180 : value
+  const v = axis === 'lon' ? wrapLongitude(value) : value
   const hemi = axis === 'lat' ? (v > 0 ? 'N' : v < 0 ? 'S' : '') : (v > 0 && v < 180 ? 'E' : v < 0 && v > -180 ? 'W' : '')
   return `${Math.abs(Math.round(v))}°${hemi}`
 }

@@ -67,7 +67,7 @@ console.log(`ratio ours / raw: ${(median(ours) / median(raw)).toFixed(2)}× (goa
 // The land pass, outside the ratio: it runs after the distances in the background job.
 const root = fileURLToPath(new URL('..', import.meta.url))
 const jiti = createJiti(import.meta.url, { alias: { '#shared': `${root}shared` } })
-const { geodesicCrossesLand, LAND_STEP_NM } = await jiti.import<typeof import('../server/utils/landCrossing')>('../server/utils/landCrossing.ts')
+const { geodesicCrossesLand, LAND_STEP_NM } = await jiti.import<typeof import('../server/utils/land')>('../server/utils/land.ts')
 geodesicCrossesLand(0, 0, 1, 1)
 const t0 = performance.now()
 let crossing = 0

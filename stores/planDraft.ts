@@ -3,6 +3,7 @@ import type { PlanDetail } from '#shared/types/plan'
 import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
 import { computeLegTable } from '#shared/utils/legTable'
+import { normaliseLongitude } from '#shared/utils/position'
 
 export interface PlanHeaderDraft {
   vesselId: number | null
@@ -76,7 +77,7 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
   }
 
   function moveWaypoint(i: number, to: { lat: number, lon: number }) {
-    updateWaypoint(i, { lat: to.lat, lon: ((((to.lon + 180) % 360) + 360) % 360) - 180 })
+    updateWaypoint(i, { lat: to.lat, lon: normaliseLongitude(to.lon) })
   }
 
   function insertWaypoint(at: number, w: Waypoint) {

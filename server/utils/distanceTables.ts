@@ -10,7 +10,7 @@ import {
 } from '#shared/types/distanceTable'
 import { choosePlans, fillRows, pairCount, pairIndex, rowChunks } from '#shared/utils/distanceTable'
 import { computeLegTable } from '#shared/utils/legTable'
-import { LAND_STEP_NM, geodesicCrossesLand } from './landCrossing'
+import { LAND_STEP_NM, geodesicCrossesLand } from './land'
 
 /** Share of the progress bar for the distance pass; the land pass takes the rest. */
 const DISTANCE_SHARE = 0.2

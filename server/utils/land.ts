@@ -5,9 +5,10 @@ import Flatbush from 'flatbush'
 import { feature } from 'topojson-client'
 import type { Topology } from 'topojson-specification'
 import type { FeatureCollection, MultiPolygon, Polygon } from 'geojson'
-import geodesic from 'geographiclib-geodesic'
 import land50m from 'world-atlas/land-50m.json'
 import { densifyLeg } from '#shared/utils/track'
+import { geodesicInverse } from '#shared/utils/geodesic'
+import { normaliseLongitude } from '#shared/utils/position'
 import type { LatLon, LegMethod } from '#shared/types/geo'
 
 /** Land polygons as planar lon/lat rings, with the indexes the checks and the tiles use. */
@@ -55,10 +56,6 @@ export function landData(): LandData {
   return land
 }
 
-export function normalizeLon(lon: number): number {
-  return ((((lon + 180) % 360) + 360) % 360) - 180
-}
-
 function isOddMultipleOf180(x: number): boolean {
   const m = ((((x - 180) % 360) + 360) % 360)
   return m < 1e-7 || m > 360 - 1e-7
@@ -72,7 +69,7 @@ function unwrapRing(coords: number[][]): PlanarRing | undefined {
   const xy: number[] = [coords[0]![0]!, coords[0]![1]!]
   for (let i = 1; i < coords.length; i++) {
     const prev = xy[xy.length - 2]!
-    const d = coords[i]![0]! - normalizeLon(prev)
+    const d = coords[i]![0]! - normaliseLongitude(prev)
     xy.push(prev + d - 360 * Math.round(d / 360), coords[i]![1]!)
   }
   const cut: number[] = []
@@ -183,7 +180,7 @@ function crossingParam(d: LandData, e: number, ax: number, ay: number, bx: numbe
 /** Point in land: even-odd walk from the grid corner south-west of the point (ray crossing, Shimrat 1962). */
 export function isLand(lat: number, lon: number): boolean {
   const d = landData()
-  const x = normalizeLon(lon), y = Math.max(-90, Math.min(90, lat))
+  const x = normaliseLongitude(lon), y = Math.max(-90, Math.min(90, lat))
   const i = Math.floor((x - GRID_X0) / GRID), j = Math.floor((y - GRID_Y0) / GRID)
   const cx = GRID_X0 + i * GRID, cy = GRID_Y0 + j * GRID
   let inside = d.corners[j * GRID_NX + i] === 1
@@ -237,7 +234,7 @@ function descend(d: LandData, px: number, py: number, cosP: number, best: Neares
 
 /** Nearest coastline edge to a point; `hint` (an edge near the previous point) seeds the bound. */
 function nearestCoast(d: LandData, p: LatLon, hint: number): Nearest {
-  const px = normalizeLon(p.lon), py = p.lat
+  const px = normaliseLongitude(p.lon), py = p.lat
   const cosP = Math.cos((py * Math.PI) / 180)
   const best: Nearest = { d2: Infinity, edge: -1, t: 0 }
   if (hint >= 0) edgeDistance(d, hint, px, py, cosP, best)
@@ -256,12 +253,12 @@ function pointOnEdge(d: LandData, n: Nearest): LatLon {
   const e = n.edge
   const lon = d.edges[4 * e]! + n.t * (d.edges[4 * e + 2]! - d.edges[4 * e]!)
   const lat = d.edges[4 * e + 1]! + n.t * (d.edges[4 * e + 3]! - d.edges[4 * e + 1]!)
-  return { lat, lon: normalizeLon(lon) }
+  return { lat, lon: normaliseLongitude(lon) }
 }
 
 /** Splits a→b at the 180° meridian when it crosses it (shortest way round). */
 function seamPieces(a: LatLon, b: LatLon): [number, number, number, number][] {
-  const ax = normalizeLon(a.lon), bx = normalizeLon(b.lon)
+  const ax = normaliseLongitude(a.lon), bx = normaliseLongitude(b.lon)
   if (Math.abs(bx - ax) <= 180) return [[ax, a.lat, bx, b.lat]]
   const bu = bx + (bx < ax ? 360 : -360)
   const seam = ax > 0 ? 180 : -180
@@ -279,19 +276,17 @@ function firstCrossing(d: LandData, a: LatLon, b: LatLon): LatLon | undefined {
       const t = crossingParam(d, e, ax, ay, bx, by)
       if (t >= 0 && t < tMin) tMin = t
     }
-    if (tMin <= 1) return { lat: ay + tMin * (by - ay), lon: normalizeLon(ax + tMin * (bx - ax)) }
+    if (tMin <= 1) return { lat: ay + tMin * (by - ay), lon: normaliseLongitude(ax + tMin * (bx - ax)) }
   }
   return undefined
 }
 
 function localNm(a: LatLon, b: LatLon): number {
-  const dx = normalizeLon(b.lon - a.lon) * Math.cos((((a.lat + b.lat) / 2) * Math.PI) / 180)
+  const dx = normaliseLongitude(b.lon - a.lon) * Math.cos((((a.lat + b.lat) / 2) * Math.PI) / 180)
   return NM_PER_DEG * Math.hypot(dx, b.lat - a.lat)
 }
 
-function geodesicNm(a: LatLon, b: LatLon): number {
-  return geodesic.Geodesic.WGS84.Inverse(a.lat, a.lon, b.lat, b.lon).s12! / 1852
-}
+const geodesicNm = (a: LatLon, b: LatLon): number => geodesicInverse(a, b).distanceNm
 
 /** Closest approach of the track points to the coastline; points that cannot beat the best so far are skipped. */
 function closestApproach(d: LandData, points: LatLon[]): { point: LatLon, coast: LatLon } {
@@ -322,7 +317,7 @@ export function checkTrack(points: LatLon[], clearanceNm: number): TrackCheck {
   const start = points[0]!
   if (isLand(start.lat, start.lon)) {
     const { coast } = closestApproach(d, [start])
-    const firstLandPoint = { lat: start.lat, lon: normalizeLon(start.lon), index: 0 }
+    const firstLandPoint = { lat: start.lat, lon: normaliseLongitude(start.lon), index: 0 }
     return { crossesLand: true, firstLandPoint, closestApproachNm: 0, closestCoastPoint: coast, withinClearance: true }
   }
   for (let i = 0; i < points.length - 1; i++) {
@@ -338,4 +333,19 @@ export function checkTrack(points: LatLon[], clearanceNm: number): TrackCheck {
 export function checkLegs(legs: LegToCheck[], clearanceNm: number, stepNm = MAX_STEP_NM): LegCheck[] {
   const step = Math.min(stepNm, MAX_STEP_NM)
   return legs.map((leg, index) => ({ index, ...checkTrack(densifyLeg(leg.from, leg.to, leg.method, step), clearanceNm) }))
+}
+
+/** Sampling step of the distance tables' land pass: chords this far apart depart from the geodesic by well under a mile. */
+export const LAND_STEP_NM = 20
+
+/**
+ * Does the geodesic from → to cross the coastline at all? The distance tables' cheaper question
+ * (no closest approach, stops at the first crossing): the geodesic sampled every `stepNm`, each
+ * chord tested against the coastline edges, so no coastline between samples is missed.
+ */
+export function geodesicCrossesLand(lat1: number, lon1: number, lat2: number, lon2: number, stepNm = LAND_STEP_NM): boolean {
+  const d = landData()
+  const points = densifyLeg({ lat: lat1, lon: lon1 }, { lat: lat2, lon: lon2 }, 'geodesic', stepNm)
+  for (let i = 0; i < points.length - 1; i++) if (firstCrossing(d, points[i]!, points[i + 1]!)) return true
+  return false
 }

@@ -1,6 +1,7 @@
 import { z } from 'zod'
 import { legMethodSchema } from './geo'
 import { latSchema, lonSchema, speedKnSchema, turnRadiusNmSchema, xteNmSchema } from './fields'
+import { normaliseLongitude } from '../utils/position'
 
 export const MAX_WAYPOINTS = 5000
 
@@ -20,7 +21,7 @@ export type WaypointInput = z.input<typeof waypointSchema>
 export type Waypoint = z.output<typeof waypointSchema>
 
 function samePosition(a: { lat: number, lon: number }, b: { lat: number, lon: number }) {
-  return Math.abs(a.lat - b.lat) < 1e-9 && Math.abs((((a.lon - b.lon) % 360) + 540) % 360 - 180) < 1e-9
+  return Math.abs(a.lat - b.lat) < 1e-9 && Math.abs(normaliseLongitude(a.lon - b.lon)) < 1e-9
 }
 
 export const waypointListSchema = z.array(waypointSchema)

@@ -1,14 +1,11 @@
 // Composite sailing under a limiting latitude on WGS84: geodesic tangent to the limit parallel,
 // run along the parallel, geodesic onward (common practice; tangency from Clairaut's relation,
 // sin α1 = cos βL / cos β1, with geodesics from geographiclib-geodesic, Karney 2013).
-import geodesic from 'geographiclib-geodesic'
+import { G, geod } from './engine/wgs84'
 import type { LatLon } from '../types/geo'
 import { DEG_PER_RAD, NM_M, RAD_PER_DEG, WGS84_A, WGS84_E2, WGS84_F } from './navConstants'
 import { normaliseCourse, normaliseLongitude } from './position'
 import { geodesicArcFromNodeDeg, geodesicInverse, geodesicVertex } from './geodesic'
-
-const G = geodesic.Geodesic
-const geod = G.WGS84
 
 export interface CompositeLeg {
   kind: 'geodesic' | 'parallel'

@@ -2,12 +2,9 @@
 // perpendicular geodesic found by iteration (Baselga & Martínez-Llario, "Intersection and point-to-line
 // solutions for geodesics on the ellipsoid", Stud. Geophys. Geod. 62, 2018; spherical step as in
 // Karney, "Geodesics on an ellipsoid of revolution", 2011, §8).
-import geodesic from 'geographiclib-geodesic'
+import { G, geod } from './engine/wgs84'
 import type { LatLon } from '../types/geo'
 import { RAD_PER_DEG, WGS84_A } from './navConstants'
-
-const G = geodesic.Geodesic
-const geod = G.WGS84
 
 export interface CrossTrackResult {
   /** Distance from the track, metres; positive to starboard (right of the track). */

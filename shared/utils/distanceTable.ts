@@ -1,11 +1,9 @@
 // Distance-table arithmetic (capability 9): approved plans matched to places by their end
 // points, else the direct geodesic (Karney, "Algorithms for geodesics", J. Geodesy 87, 2013).
-import geodesic from 'geographiclib-geodesic'
+import { G, geod } from './engine/wgs84'
 import type { TablePlace, TablePlan } from '../types/distanceTable'
 import { NM_M } from './navConstants'
 
-const G = geodesic.Geodesic
-const geod = G.WGS84
 // A degree of latitude is never shorter than 59.7 nm on WGS84 (at the equator): a cheap lower bound.
 const MIN_NM_PER_DEG_LAT = 59.6
 

@@ -1,13 +1,10 @@
 // Geodesics on WGS84 through geographiclib-geodesic (Karney, "Algorithms for geodesics", J. Geodesy 87, 2013).
-import geodesic from 'geographiclib-geodesic'
+import { G, geod } from './engine/wgs84'
 import type { LatLon } from '../types/geo'
 import { NM_M, RAD_PER_DEG, DEG_PER_RAD, WGS84_F } from './navConstants'
 import { normaliseCourse, normaliseLongitude } from './position'
 import { stepCount } from './engine/steps'
 
-// The default import is the one that works on the server (named imports fail at run time).
-const G = geodesic.Geodesic
-const geod = G.WGS84
 const LATLON = G.LATITUDE | G.LONGITUDE
 const INVERSE_MASK = G.DISTANCE | G.AZIMUTH
 

@@ -1,13 +1,11 @@
 // Intermediate waypoints on a geodesic leg: where it crosses meridians at multiples of N°, or every
 // N nm (common practice); the geodesic by geographiclib-geodesic (Karney 2013), meridian crossings by
 // Newton's method with dλ/ds = sin α / (ν cos φ) (Karney 2013, eq. 4 and §2).
-import geodesic from 'geographiclib-geodesic'
+import { G, geod } from './engine/wgs84'
 import type { LatLon } from '../types/geo'
 import { DEG_PER_RAD, NM_M, RAD_PER_DEG, WGS84_A, WGS84_E2 } from './navConstants'
 import { normaliseLongitude } from './position'
 
-const G = geodesic.Geodesic
-const geod = G.WGS84
 const MASK = G.LATITUDE | G.LONGITUDE | G.AZIMUTH | G.LONG_UNROLL
 
 type Line = ReturnType<typeof geod.InverseLine>

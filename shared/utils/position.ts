@@ -161,10 +161,16 @@ export function formatPosition(p: LatLon, decimals = 2): string {
   return `${formatLatitude(p.lat, decimals)} ${formatLongitude(p.lon, decimals)}`
 }
 
-/** Longitude reduced to −180..180 (exact remainder, as GeographicLib's AngNormalize). */
+/** Longitude reduced to −180..180 (exact remainder, as GeographicLib's AngNormalize); also the signed difference of two longitudes. */
 export function normaliseLongitude(lon: number): number {
   const y = lon % 360
   return y > 180 ? y - 360 : y < -180 ? y + 360 : y
+}
+
+/** Longitude reduced to −180 ≤ λ < 180: half-open, so edges and cells never count the 180° meridian twice. */
+export function wrapLongitude(lon: number): number {
+  const y = normaliseLongitude(lon)
+  return y === 180 ? -180 : y
 }
 
 /** Course in 0 ≤ c < 360. */

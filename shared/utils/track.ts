@@ -2,6 +2,7 @@
 import type { LatLon, LegMethod } from '../types/geo'
 import { geodesicDensify } from './geodesic'
 import { rhumbDensify } from './rhumb'
+import { wrapLongitude } from './position'
 
 /** Points along a leg at most stepNm apart, both ends included (geodesic: Karney 2013; rhumb: Karney 2024). */
 export function densifyLeg(from: LatLon, to: LatLon, method: LegMethod, stepNm: number): LatLon[] {
@@ -25,7 +26,7 @@ export function unwrapLongitudes<T extends LatLon>(points: readonly T[]): T[] {
   for (let i = 0; i < points.length; i++) {
     const p = points[i]!
     let lon = p.lon
-    if (i > 0) lon = prev + ((((lon - prev) % 360) + 540) % 360 - 180)
+    if (i > 0) lon = prev + wrapLongitude(lon - prev)
     out.push(lon === p.lon ? p : { ...p, lon })
     prev = lon
   }

@@ -1,7 +1,7 @@
 // Coarse land check against Natural Earth 1:50m land (world-atlas 2.0.2). Positions are from
 // memory (atlas knowledge), chosen well inside land or sea so the coarse coastline cannot matter.
 import { describe, expect, it } from 'vitest'
-import { checkLegs, checkTrack, isLand, landData } from '../../server/utils/land'
+import { checkLegs, checkTrack, geodesicCrossesLand, isLand, landData } from '../../server/utils/land'
 import type { LatLon } from '../../shared/types/geo'
 
 /** Points along a straight line in latitude/longitude (a rhumb line for these short tests). */
@@ -142,5 +142,19 @@ describe('checkLegs (densified by the navigation engine)', () => {
   it('finds Africa on a geodesic from Dakar approaches to the Gulf of Aden', () => {
     const r = checkLegs([{ from: { lat: 14.5, lon: -17.8 }, to: { lat: 12, lon: 46 }, method: 'geodesic' }], 5)
     expect(r[0]!.crossesLand).toBe(true)
+  })
+})
+
+describe('geodesicCrossesLand (the distance tables\' land pass)', () => {
+  // Positions from memory, well off any coast, so the coarse coastline cannot decide the answer.
+  it.each([
+    ['Rotterdam approaches to the Gulf of Genoa, across France', 52, 3.5, 43.8, 8.8, true],
+    ['Dakar approaches to the Gulf of Aden, across Africa', 14.5, -17.8, 12, 46, true],
+    ['North Pacific across 180° to the Gulf of Alaska', 50, 175, 55, -145, false],
+    ['Lisbon approaches to New York approaches, open Atlantic', 38.6, -9.6, 40.3, -73.5, false],
+  ])('%s: %s', (_name, lat1, lon1, lat2, lon2, crosses) => {
+    expect(geodesicCrossesLand(lat1, lon1, lat2, lon2)).toBe(crosses)
+    // The full check, densified at 2 nm, agrees.
+    expect(checkLegs([{ from: { lat: lat1, lon: lon1 }, to: { lat: lat2, lon: lon2 }, method: 'geodesic' }], 0)[0]!.crossesLand).toBe(crosses)
   })
 })

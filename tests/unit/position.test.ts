@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { PositionError, formatLatitude, formatLongitude, formatPosition, normaliseCourse, normaliseLongitude, parseLatitude, parseLongitude, parsePosition } from '../../shared/utils/position'
+import { PositionError, formatLatitude, formatLongitude, formatPosition, normaliseCourse, normaliseLongitude, wrapLongitude, parseLatitude, parseLongitude, parsePosition } from '../../shared/utils/position'
 
 const SF = { lat: 37 + 47.5 / 60, lon: -(122 + 28 / 60) }
 
@@ -81,6 +81,11 @@ describe('formatting positions', () => {
     expect(normaliseLongitude(-190)).toBe(170)
     expect(normaliseLongitude(540)).toBe(180)
     expect(normaliseLongitude(-180)).toBe(-180)
+    // Half-open −180 ≤ λ < 180, by definition of the range: 180° is written −180°.
+    expect(wrapLongitude(180)).toBe(-180)
+    expect(wrapLongitude(540)).toBe(-180)
+    expect(wrapLongitude(-180)).toBe(-180)
+    expect(wrapLongitude(179.5 - 360)).toBe(179.5)
     expect(normaliseCourse(360)).toBe(0)
     expect(normaliseCourse(-90)).toBe(270)
     expect(Object.is(normaliseCourse(-0), 0)).toBe(true)

@@ -3,16 +3,13 @@
 // angle (the foot-of-perpendicular step of Baselga & Martínez-Llario 2018 applied along the rhumb
 // line of Karney 2024). On a parallel the foot lies on the position's meridian and the distance is
 // the meridian arc (Snyder, USGS PP 1395, eq. 3-21).
-import geodesic from 'geographiclib-geodesic'
+import { G, geod } from '../engine/wgs84'
 import type { LatLon } from '../../types/geo'
 import { RAD_PER_DEG, WGS84_A } from '../navConstants'
 import { normaliseLongitude } from '../position'
 import { meridianDistanceM, rhumbInverse, rhumbLine, rhumbLinePosition, type RhumbLine } from '../rhumb'
 import { RECTIFYING_RADIUS_M } from '../engine/auxLatitude'
 import type { CrossTrackResult } from '../crossTrack'
-
-const G = geodesic.Geodesic
-const geod = G.WGS84
 
 /** Along-track range in which the extended rhumb line stays clear of the poles, metres. */
 function poleSafeRange(line: RhumbLine): [number, number] {

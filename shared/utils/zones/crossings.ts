@@ -8,7 +8,7 @@ import { RAD_PER_DEG } from '../navConstants'
 import { rhumbInverse } from '../rhumb'
 import type { SubEdge } from './prepare'
 import { type GeodesicCurve, type RhumbCurve, geodesicLine } from './legCurve'
-import { POS_MASK, cross3, dot3, isometricLat, radii, unit3, type V3 } from './geometry'
+import { POS_MASK, cross3, dot3, isometricLat, radii, unit3, wrap180, type V3 } from './geometry'
 
 const TOL_M = 1e-4
 const MAX_ITER = 30
@@ -26,7 +26,7 @@ function geodesicNewton(leg: GeodesicCurve, e: SubEdge, s0: number, t0: number):
     const q = e.line.Position(e.t0 + t, POS_MASK)
     const latM = (p.lat2! + q.lat2!) / 2
     const r = radii(latM)
-    const dLon = ((q.lon2! - p.lon2! + 540) % 360) - 180
+    const dLon = wrap180(q.lon2! - p.lon2!)
     const dx = dLon * RAD_PER_DEG * r.parallel
     const dy = (q.lat2! - p.lat2!) * RAD_PER_DEG * r.meridian
     // q's course turned into p's frame by the convergence of the meridians, Δλ·sin φ.
@@ -117,7 +117,7 @@ function alongRhumb(leg: RhumbCurve, lat: number, lon: number, x1: number, lineL
 
 /** Adds to `out` the distances along a rhumb leg where it crosses a sub-edge (at most two). */
 export function rhumbCrossings(leg: RhumbCurve, e: SubEdge, out: number[]) {
-  const x1 = leg.x0 + (((e.lon1 - leg.lon0 + 540) % 360) - 180) * RAD_PER_DEG
+  const x1 = leg.x0 + wrap180(e.lon1 - leg.lon0) * RAD_PER_DEG
   const x2 = x1 + (e.lon2 - e.lon1) * RAD_PER_DEG
   const g1 = leg.ux * (e.psi1 - leg.y0) - leg.uy * (x1 - leg.x0)
   const g2 = leg.ux * (e.psi2 - leg.y0) - leg.uy * (x2 - leg.x0)

@@ -1,12 +1,12 @@
 // Small geometry helpers of the zone engine: the auxiliary sphere of reduced latitude (on which a
 // geodesic is a great circle, Karney 2013 §2), Mercator ordinates (in which a rhumb line is straight),
 // and the radii of curvature (Snyder 1987, eqs. 4-18, 4-20).
-import geodesic from 'geographiclib-geodesic'
+import { G, geod } from '../engine/wgs84'
 import { RAD_PER_DEG, WGS84_A, WGS84_E2, WGS84_F } from '../navConstants'
 import { conformalTan, tanDeg } from '../engine/auxLatitude'
 
-export const G = geodesic.Geodesic
-export const geod = G.WGS84
+export { G, geod }
+export { wrapLongitude as wrap180 } from '../position'
 export const LINE_CAPS = G.LATITUDE | G.LONGITUDE | G.AZIMUTH | G.DISTANCE_IN
 export const POS_MASK = G.LATITUDE | G.LONGITUDE | G.AZIMUTH | G.LONG_UNROLL
 
@@ -44,8 +44,3 @@ export function radii(lat: number): { parallel: number, meridian: number, prime:
   return { parallel: prime * Math.cos(phi), meridian: prime * (1 - WGS84_E2) / w2, prime }
 }
 
-/** Longitude reduced to −180 ≤ λ < 180. */
-export function wrap180(lon: number): number {
-  const y = ((lon + 180) % 360 + 360) % 360 - 180
-  return y === 180 ? -180 : y
-}

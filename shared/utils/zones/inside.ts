@@ -4,7 +4,7 @@
 // the edge's start against the edge's own course; Karney 2013, inverse problem).
 import type { PreparedZones } from './prepare'
 import { searchWrapped } from './prepare'
-import { G, geod } from './geometry'
+import { G, geod, wrap180 } from './geometry'
 
 /** Is the sub-edge north of the position (the position lies to the south of its geodesic)? */
 function edgeAbove(lat1: number, lon1: number, azi1: number, eastward: boolean, lat: number, lon: number): boolean {
@@ -21,7 +21,7 @@ export function pointInZone(prepared: PreparedZones, zoneIndex: number, lat: num
   searchWrapped(prepared.edgeIndex, lon, lat, lon, z.latMax, (i) => {
     const e = prepared.edges[i]!
     if (e.zone !== zoneIndex) return
-    const p = e.lon1 + (((lon - e.lon1 + 540) % 360) - 180)
+    const p = e.lon1 + wrap180(lon - e.lon1)
     // Half-open in longitude, so a meridian through a vertex counts it once.
     if (!((e.lon1 <= p && p < e.lon2) || (e.lon2 <= p && p < e.lon1))) return
     if (lat > e.latMax) return
