@@ -1,6 +1,5 @@
 import type { LatLon, LegMethod } from '#shared/types/geo'
-import { inverseAllMethods, directByMethod } from '#shared/utils/solver'
-import { geodesicVertex } from '#shared/utils/geodesic'
+import { inverseAllMethods, directByMethod, solverVertex } from '#shared/utils/solver'
 
 export interface SolverPair { from: LatLon, to: LatLon }
 export interface SolverDirectQuestion { from: LatLon, course: number, distanceM: number, method: LegMethod }
@@ -11,7 +10,7 @@ export function useQuickSolver() {
   const question = ref<SolverDirectQuestion | null>(null)
 
   const inverse = computed(() => (pair.value ? inverseAllMethods(pair.value.from, pair.value.to) : null))
-  const vertex = computed(() => (pair.value ? geodesicVertex(pair.value.from, pair.value.to) : null))
+  const vertex = computed(() => (pair.value ? solverVertex(pair.value.from, pair.value.to) : null))
   const direct = computed(() => {
     const q = question.value
     if (!q) return null

@@ -8,6 +8,18 @@ function angleName(value: number, pos: string, neg: string): string {
 }
 const positionName = (p: LatLon) => `${angleName(p.lat, 'N', 'S')} ${angleName(normaliseLongitude(p.lon), 'E', 'W')}`
 
+/** Leg numbers as 3, 5–9, 12. */
+function rangeText(legs: number[]): string {
+  const parts: string[] = []
+  for (let i = 0; i < legs.length;) {
+    let j = i
+    while (j + 1 < legs.length && legs[j + 1] === legs[j]! + 1) j++
+    parts.push(j > i ? `${legs[i]}–${legs[j]}` : String(legs[i]))
+    i = j + 1
+  }
+  return parts.join(', ')
+}
+
 /** Track tools over the draft: each replaces the waypoint list in one undoable step. */
 export function useTrackTools() {
   const store = usePlanDraftStore()
@@ -33,14 +45,17 @@ export function useTrackTools() {
   function applyLimit(limitLat: number): string {
     const limit = Math.abs(limitLat)
     if (!(limit > 0 && limit < 90)) return 'Set a limiting latitude between 0° and 90°.'
+    const shown = formatLimitLatitude(limit)
     const src = store.waypoints
     const list: Waypoint[] = [src[0]!]
-    const notes: string[] = []
+    const endsBeyond: number[] = []
     let replaced = 0
+    let geodesicLegs = 0
     for (let i = 1; i < src.length; i++) {
       const from = src[i - 1]!
       const to = src[i]!
       if (to.method === 'geodesic') {
+        geodesicLegs++
         const r = compositeSailing(from, to, limit)
         if (r.kind === 'composite') {
           const [, p1, p2] = r.points
@@ -50,14 +65,22 @@ export function useTrackTools() {
           replaced++
           continue
         }
-        if (r.kind === 'end-beyond-limit') notes.push(`Leg ${i}: ${r.message}`)
+        if (r.kind === 'end-beyond-limit') endsBeyond.push(i)
       }
       list.push(to)
     }
-    const poleward = list.filter(w => Math.abs(w.lat) > limit + 1e-9).length
-    if (poleward) notes.push(`${poleward} waypoint${poleward === 1 ? ' lies' : 's lie'} poleward of ${limit}°: move ${poleward === 1 ? 'it' : 'them'} by hand.`)
-    if (replaced) store.replaceWaypoints(list, `hold ${limit}°`)
-    return [replaced ? `${replaced} leg${replaced === 1 ? '' : 's'} replaced by the composite track at ${limit}°.` : `No geodesic leg goes beyond ${limit}°.`, ...notes].join(' ')
+    if (replaced) store.replaceWaypoints(list, `hold ${shown}`)
+    const out: string[] = [replaced
+      ? `${replaced} leg${replaced === 1 ? '' : 's'} replaced by the composite track at ${shown}.`
+      : geodesicLegs
+        ? `No leg changed: ${endsBeyond.length ? 'the other geodesic legs stay' : 'every geodesic leg stays'} within ${shown}.`
+        : 'No leg changed: the plan has no geodesic legs (the limit applies to geodesic legs; undo a split, apply the limit, then split).']
+    if (endsBeyond.length)
+      out.push(`Leg${endsBeyond.length === 1 ? '' : 's'} ${endsBeyond.join(', ')} left as ${endsBeyond.length === 1 ? 'it is' : 'they are'}: an end lies poleward of ${shown}, so the limit cannot be kept there.`)
+    const rhumbBeyond = list.slice(1).map((w, k) => ({ w, leg: k + 1 })).filter(({ w, leg }) => w.method === 'rhumb' && (Math.abs(w.lat) > limit + 1e-6 || Math.abs(list[leg - 1]!.lat) > limit + 1e-6)).map(x => x.leg)
+    if (rhumbBeyond.length)
+      out.push(`Rhumb-line leg${rhumbBeyond.length === 1 ? '' : 's'} ${rangeText(rhumbBeyond)} reach${rhumbBeyond.length === 1 ? 'es' : ''} beyond ${shown} and ${rhumbBeyond.length === 1 ? 'is' : 'are'} not changed: move ${rhumbBeyond.length === 1 ? 'its waypoints' : 'their waypoints'} by hand, or undo the split and apply the limit first.`)
+    return out.join(' ')
   }
 
   return { splitLeg, applyLimit }

@@ -31,6 +31,8 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
   const roleMayEdit = ref(true)
   /** Cells whose typed text cannot be read, keyed by cell; nothing is saved while any remain. */
   const cellErrors = ref<Record<string, string>>({})
+  /** Where the chart is looking (UI state), so a first waypoint can start there. */
+  const viewCentre = ref<{ lat: number, lon: number } | null>(null)
   /** The last land check of the current track, cleared by any change to the waypoints. */
   const landCheck = shallowRef<LandCheckResult | null>(null)
 
@@ -132,7 +134,7 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
 
   return {
     planId, version, status, header, waypoints, selected, undoStack, dirty, headerDirty, waypointsDirty, editable, legTable, plan, roleMayEdit,
-    cellErrors, hasCellErrors, landCheck, load, checkpoint, updateWaypoint, moveWaypoint, insertWaypoint, removeWaypoint, reorder, replaceWaypoints,
+    cellErrors, hasCellErrors, landCheck, viewCentre, load, checkpoint, updateWaypoint, moveWaypoint, insertWaypoint, removeWaypoint, reorder, replaceWaypoints,
     undo, revert, markSaved, setCellError,
   }
 })

@@ -80,9 +80,24 @@ export async function assertVesselInCompany(user: SessionUser, vesselId: number,
   if (!vessel) throw createError({ statusCode: 400, statusMessage: 'vesselId: no such vessel in your company' })
 }
 
+/** The plan's first (and last) waypoints from its departure and arrival places in the user's company. */
+async function waypointsFromPlaces(user: SessionUser, input: PlanCreateInput, db: Knex.Transaction): Promise<Waypoint[]> {
+  const ends = [['departurePlaceId', input.departurePlaceId], ['arrivalPlaceId', input.arrivalPlaceId]] as const
+  const list: Waypoint[] = []
+  for (const [field, id] of ends) {
+    if (id == null) continue
+    const place = await db('places').where({ id, company_id: user.companyId }).first('name', 'lat', 'lon')
+    if (!place) throw createError({ statusCode: 400, statusMessage: `${field}: no such place in your company` })
+    list.push({ name: place.name, lat: place.lat, lon: place.lon, method: list.length ? 'geodesic' : 'rhumb' })
+  }
+  // The same place at both ends (a round trip) starts with the departure only.
+  return list.length === 2 && list[0]!.lat === list[1]!.lat && list[0]!.lon === list[1]!.lon ? list.slice(0, 1) : list
+}
+
 export async function createPlan(user: SessionUser, input: PlanCreateInput, waypoints: Waypoint[] = []) {
   return useDb().transaction(async (trx) => {
     await assertVesselInCompany(user, input.vesselId, trx)
+    if (input.startFromPlaces && !waypoints.length) waypoints = await waypointsFromPlaces(user, input, trx)
     const [row] = await trx('plans').insert({
       company_id: user.companyId, vessel_id: input.vesselId, title: input.title, departure_utc: input.departureUtc, speed_kn: input.speedKn,
       limit_lat: input.limitLat ?? null, departure_place_id: input.departurePlaceId ?? null, arrival_place_id: input.arrivalPlaceId ?? null, created_by: user.id,

@@ -29,6 +29,8 @@ export const planCreateSchema = z.object({
   limitLat: latSchema.refine(v => v > 0 && v < 90, 'must be between 0 and 90 (applies north and south)').nullable().optional(),
   departurePlaceId: idSchema.nullable().optional(),
   arrivalPlaceId: idSchema.nullable().optional(),
+  /** Start the waypoint list at the departure place (and end it at the arrival place) when they are given. */
+  startFromPlaces: z.boolean({ error: 'startFromPlaces must be true or false' }).optional(),
 })
 export type PlanCreateInput = z.infer<typeof planCreateSchema>
 
@@ -38,7 +40,7 @@ export const waypointsPutSchema = z.object({
 })
 export type WaypointsPutInput = z.input<typeof waypointsPutSchema>
 
-export const planHeaderSchema = planCreateSchema.omit({ vesselId: true }).extend({
+export const planHeaderSchema = planCreateSchema.omit({ vesselId: true, startFromPlaces: true }).extend({
   version: versionSchema,
 })
 export type PlanHeaderInput = z.infer<typeof planHeaderSchema>

@@ -107,6 +107,30 @@ export function parseLongitude(text: string): number {
   return parseAngle(text, 'longitude')
 }
 
+/**
+ * A limiting latitude as navigators write it (50, 50N, 50°N, 48°45′N, 48 45, 40S): the magnitude,
+ * since the limit applies on whichever side of the equator the track's vertex lies (common practice).
+ */
+export function parseLimitLatitude(text: string): number {
+  const s = normaliseText(text)
+  if (!s) throw new PositionError('Limiting latitude is empty')
+  let value: number
+  try { value = parseLatitude(s) }
+  catch (e) {
+    // "48 45" needs no hemisphere here: the limit is a magnitude.
+    if (!/missing hemisphere/.test((e as Error).message)) throw new PositionError(`Limiting ${(e as Error).message.replace(/^Latitude/, 'latitude')}`)
+    value = parseLatitude(`${s}N`)
+  }
+  const magnitude = Math.abs(value)
+  if (!(magnitude > 0 && magnitude < 90)) throw new PositionError('Limiting latitude must be between 0° and 90° (it applies north and south)')
+  return magnitude
+}
+
+/** A limiting latitude shown as it is written on the chart: 48°45.0′ (no hemisphere: it applies both sides). */
+export function formatLimitLatitude(limit: number): string {
+  return formatLatitude(Math.abs(limit), 1).slice(0, -1)
+}
+
 /** Split a position into its two angles: at a comma/semicolon, at hemisphere letters, or by counting numbers. */
 function splitPosition(s: string): [string, string] {
   const sep = s.split(/[,;]/)

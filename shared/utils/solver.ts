@@ -1,6 +1,6 @@
 // One call per geodesy question, as the API and the quick solver ask them.
 import type { LatLon, LegMethod } from '../types/geo'
-import { geodesicDirect, geodesicInverse } from './geodesic'
+import { geodesicDirect, geodesicInverse, geodesicVertex, type GeodesicVertex } from './geodesic'
 import { rhumbDirect, rhumbInverse } from './rhumb'
 import { greatEllipseInverse } from './greatEllipse'
 
@@ -34,3 +34,24 @@ export function directByMethod(from: LatLon, course: number, distanceM: number, 
   return { to: { lat: r.lat, lon: r.lon }, finalCourse: r.course }
 }
 
+
+export type SolverVertexAnswer =
+  | { kind: 'same' }
+  | { kind: 'equator' }
+  | { kind: 'vertex', vertex: GeodesicVertex }
+
+const EQUATOR_EPS_DEG = 1e-9
+
+/**
+ * The vertex question as a navigator asks it (Clairaut's relation, via geodesicVertex): two identical
+ * positions have no track; a geodesic along the equator (course 090°/270° at 0°) has every point at the
+ * same latitude, so no vertex; otherwise the highest latitude of the great-circle-like line.
+ */
+export function solverVertex(from: LatLon, to: LatLon): SolverVertexAnswer {
+  const g = geodesicInverse(from, to)
+  if (g.distanceM < 1e-3) return { kind: 'same' }
+  const alongEquator = Math.abs(from.lat) < EQUATOR_EPS_DEG && Math.abs(to.lat) < EQUATOR_EPS_DEG
+    && Math.abs(Math.abs(g.initialCourse - 180) - 90) < 1e-6
+  if (alongEquator) return { kind: 'equator' }
+  return { kind: 'vertex', vertex: geodesicVertex(from, to) }
+}

@@ -33,4 +33,40 @@ describe('quick solver', () => {
     await page.getByLabel('Unit').selectOption('m')
     await expect.poll(() => page.getByTestId('solver-direct-to').textContent()).toBe('00°00.00′N 010°00.00′E')
   })
+
+  it('answers the edge cases in words: along the equator, the same position twice, a latitude beyond 90°', async () => {
+    const page = await browser.newPage()
+    const errors: string[] = []
+    page.on('pageerror', e => errors.push(e.message))
+    page.on('console', m => { if (m.type() === 'error') errors.push(m.text()) })
+    await signIn(page, 'planner')
+    await page.goto('/solver')
+    await page.getByTestId('solver-results').waitFor()
+    const vertex = page.getByTestId('solver-vertex')
+
+    await page.getByLabel('From').fill('0 0')
+    await page.getByLabel('To').fill('00 00N 010 00W')
+    await expect.poll(() => vertex.textContent()).toContain('runs along the equator')
+
+    await page.getByLabel('To').fill('0 0')
+    await expect.poll(() => vertex.textContent()).toContain('the same')
+    expect(await page.getByTestId('solver-row-geodesic').textContent()).toContain('—')
+    expect(await page.getByTestId('solver-row-geodesic').textContent()).not.toContain('180.00°')
+
+    await page.getByLabel('From').fill('95 00N 010 00E')
+    await page.getByText('95° is beyond 90°').waitFor()
+    expect(errors).toEqual([])
+  })
+
+  it('fits a phone: no sideways scroll, the answers straight after the two positions', async () => {
+    const page = await browser.newPage(390, 844)
+    await signIn(page, 'planner')
+    await page.goto('/solver')
+    await page.getByTestId('solver-results').waitFor()
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390)
+    const top = async (id: string) => (await page.getByTestId(id).boundingBox())!.y
+    expect(await top('solver-results')).toBeGreaterThan(await top('solver-positions'))
+    expect(await top('solver-results')).toBeLessThan(await top('solver-direct'))
+    await shoot(page, 'solver-phone')
+  })
 })

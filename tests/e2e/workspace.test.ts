@@ -61,7 +61,10 @@ describe('plan workspace', () => {
 
     // Hold the limiting latitude: the ocean leg becomes geodesic – parallel – geodesic, nothing poleward of it.
     expect(Math.max(...(await latitudes(page)))).toBeLessThan(LIMIT)
-    await page.getByTestId('limit-lat').fill(String(LIMIT))
+    // The limit is typed once, in the header, as navigators write it; the track tools hold it.
+    await page.getByLabel('Limiting latitude', { exact: true }).fill('48°45′N')
+    await page.getByLabel('Limiting latitude', { exact: true }).press('Enter')
+    await expect.poll(() => page.getByTestId('tool-limit').textContent()).toContain('48°45.0′')
     await page.getByTestId('apply-limit').click()
     await expect.poll(() => rows(page).count()).toBe(6)
     const lats = await latitudes(page)
@@ -164,8 +167,10 @@ describe('plan workspace', () => {
     await page.getByRole('button', { name: 'Create plan' }).click()
     await page.getByText('title needs at least 3 characters').waitFor()
     await page.getByLabel('Title').fill('Cape Town – Fremantle, trial')
-    await page.getByLabel('Departure (UTC)').fill('2027-01-05T08:00')
-    await page.getByLabel('Limiting latitude (°, optional)').fill('40')
+    await page.getByLabel('Departure (UTC)').fill('2027-01-05 08:00')
+    await page.getByLabel('Limiting latitude (optional)').fill('40°S')
+    await page.getByLabel('Limiting latitude (optional)').blur()
+    expect(await page.getByLabel('Limiting latitude (optional)').inputValue()).toBe('40°00.0′')
     await page.getByLabel('Departure place', { exact: true }).selectOption({ label: 'Cape Town (ZACPT)' })
     await page.getByLabel('Arrival place', { exact: true }).selectOption({ label: 'Fremantle (AUFRE)' })
     await shoot(page, 'workspace-new')

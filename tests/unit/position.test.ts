@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { PositionError, formatLatitude, formatLongitude, formatPosition, normaliseCourse, normaliseLongitude, wrapLongitude, parseLatitude, parseLongitude, parsePosition } from '../../shared/utils/position'
+import { PositionError, formatLatitude, formatLimitLatitude, parseLimitLatitude, formatLongitude, formatPosition, normaliseCourse, normaliseLongitude, wrapLongitude, parseLatitude, parseLongitude, parsePosition } from '../../shared/utils/position'
 
 const SF = { lat: 37 + 47.5 / 60, lon: -(122 + 28 / 60) }
 
@@ -89,5 +89,45 @@ describe('formatting positions', () => {
     expect(normaliseCourse(360)).toBe(0)
     expect(normaliseCourse(-90)).toBe(270)
     expect(Object.is(normaliseCourse(-0), 0)).toBe(true)
+  })
+})
+
+describe('limiting latitude as navigators write it (common practice: a magnitude, applied on the vertex side)', () => {
+  const accepted: [string, number][] = [
+    ['50', 50],
+    ['50N', 50],
+    ['50°N', 50],
+    ['50° N', 50],
+    ['N50', 50],
+    ['40S', 40],
+    ['-40', 40],
+    ['48°45′N', 48.75],
+    ['48 45', 48.75],
+    ['48-45.0N', 48.75],
+    ['48.75', 48.75],
+    ['48°45.0′', 48.75],
+  ]
+  it.each(accepted)('reads %s', (text, value) => {
+    expect(parseLimitLatitude(text)).toBeCloseTo(value, 12)
+  })
+
+  const rejected: [string, RegExp][] = [
+    ['', /empty/],
+    ['0', /between 0° and 90°/],
+    ['90N', /between 0° and 90°/],
+    ['95', /beyond 90/],
+    ['50E', /not a latitude hemisphere/],
+    ['48°61′N', /minutes must be less than 60/],
+    ['fifty', /unexpected/],
+  ]
+  it.each(rejected)('refuses %s with a message naming the problem', (text, message) => {
+    expect(() => parseLimitLatitude(text)).toThrow(PositionError)
+    expect(() => parseLimitLatitude(text)).toThrow(message)
+  })
+
+  it('writes the limit back in degrees and minutes, and reads its own output', () => {
+    expect(formatLimitLatitude(48.75)).toBe('48°45.0′')
+    expect(formatLimitLatitude(-40)).toBe('40°00.0′')
+    expect(parseLimitLatitude(formatLimitLatitude(47.123))).toBeCloseTo(47.123, 3)
   })
 })
