@@ -4,14 +4,14 @@ import type { SessionUser } from '#shared/types/auth'
 import type { PlanView } from '#shared/types/planView'
 import type { PlanLeg } from '#shared/utils/legTable'
 import { ALL_CAUTIONS } from '#shared/utils/cautions'
-import { formatInZone, formatUtc } from '#shared/utils/timeFormat'
+import { formatPlaceTime, formatUtc } from '#shared/utils/timeFormat'
 import { formatZoneDescription, zoneTime } from '#shared/utils/manoeuvre'
-import { formatPosition } from '#shared/utils/position'
+import { formatLimitLatitude, formatPosition } from '#shared/utils/position'
 
 export interface BriefVessel { name: string, imoNumber: string, callSign: string }
 export interface CrewBrief { subject: string, text: string, html: string }
 
-const LEG_HEADERS = ['Leg', 'To', 'Position', 'Sailing', 'Course °T', 'Dist nm', 'Speed kn', 'Time', 'ETA UTC', 'ETA zone time']
+const LEG_HEADERS = ['Leg', 'To', 'Position', 'Sailing', 'Course °T', 'Dist nm', 'Speed kn', 'Time', 'ETA UTC', 'ETA ship\'s zone time']
 
 const course = (c: number) => `${c.toFixed(1).padStart(5, '0')}`
 function formatDuration(hours: number): string {
@@ -29,7 +29,7 @@ function legCells(leg: PlanLeg): string[] {
     courses, leg.distanceNm.toFixed(1), leg.speedKn.toFixed(1), formatDuration(leg.hours), formatUtc(leg.etaUtc), zone]
 }
 
-const local = (iso: string, zone: string | null) => (zone ? `${formatInZone(iso, zone)} local (${zone})` : 'local time not known (no time zone for this place)')
+const local = (iso: string, zone: string | null) => (zone ? formatPlaceTime(iso, zone) : 'local time not known (no time zone for this place)')
 
 function approvalLine(plan: PlanView['plan']): { approved: boolean, line: string } {
   if (plan.status === 'approved' && plan.approvedAt)
@@ -49,7 +49,7 @@ function briefFacts(view: PlanView, vessel: BriefVessel) {
     ['Arrival', `${last}: ETA ${formatUtc(totals.etaUtc)}; ${local(totals.etaUtc, plan.arrivalTimeZone)}`],
     ['Total distance', `${totals.distanceNm.toFixed(1)} nm in ${view.legs.length} legs (saving over rhumb lines ${totals.savingNm.toFixed(1)} nm)`],
     ['Time on passage', `${formatDuration(totals.hours)} at a planned ${plan.speedKn.toFixed(1)} kn`],
-    ...(plan.limitLat ? [['Limiting latitude', `${plan.limitLat}° (north and south)`]] : []),
+    ...(plan.limitLat ? [['Limiting latitude', `${formatLimitLatitude(plan.limitLat)} (north and south)`]] : []),
   ] as [string, string][]
 }
 

@@ -66,6 +66,9 @@ export function legTableFor(plan: Pick<PlanDetail, 'departureUtc' | 'speedKn'>, 
 export async function getPlanView(user: SessionUser, id: number): Promise<PlanView> {
   const plan = await findPlan(user, id)
   const waypoints = await loadWaypoints(id)
+  // Without a departure or arrival place, the time zone comes from the first or last waypoint's position.
+  plan.departureTimeZone ??= waypoints.length ? timeZoneAt(waypoints[0]!.lat, waypoints[0]!.lon) : null
+  plan.arrivalTimeZone ??= waypoints.length > 1 ? timeZoneAt(waypoints.at(-1)!.lat, waypoints.at(-1)!.lon) : null
   const { legs, totals } = legTableFor(plan, waypoints)
   const fuel = await fuelForPlan(user.companyId, plan.vesselId, legs)
   return { plan, waypoints, legs, totals, fuel, events: await listEvents(id) }

@@ -31,7 +31,8 @@ export function allowedPlanActions(plan: { status: PlanStatus, masterUserId: num
     actions.push(step)
   }
   if (plan.status === 'approved' && REVISE_ROLES.includes(user.role)) actions.push('revise')
-  if (BRIEF_ROLES.includes(user.role)) actions.push('brief')
+  // The crew get the plan they will sail: the workspace offers the brief once the master has approved it.
+  if (plan.status === 'approved' && BRIEF_ROLES.includes(user.role)) actions.push('brief')
   if (REMARK_ROLES.includes(user.role)) actions.push('remark')
   return actions
 }

@@ -28,3 +28,15 @@ export function parseUtcText(text: string): string {
   if (d.getUTCMonth() !== month! - 1 || d.getUTCDate() !== day) throw new Error(`${year}-${String(month).padStart(2, '0')}-${String(day).padStart(2, '0')} is not a date`)
   return d.toISOString()
 }
+
+/**
+ * The time at a place, said as what it is: `port time (Asia/Singapore)` for a place's civil zone,
+ * `zone time (UTC+8)` when the place lies at sea and only the nautical zone is known (IANA `Etc/GMT-8`
+ * means UTC+8: the sign is POSIX's, reversed).
+ */
+export function formatPlaceTime(iso: string | Date, timeZone: string): string {
+  const nautical = /^Etc\/GMT([+-]\d+)?$/.exec(timeZone)
+  if (!nautical) return `${formatInZone(iso, timeZone)} port time (${timeZone})`
+  const offset = -Number(nautical[1] ?? 0)
+  return `${formatInZone(iso, timeZone)} zone time (UTC${offset === 0 ? '' : offset > 0 ? `+${offset}` : `−${-offset}`})`
+}

@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest'
 import { loginAs, startServer } from '../support/server'
-import { shoot, signIn, useBrowser } from '../support/browser'
+import { openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
 const browser = useBrowser()
@@ -15,7 +15,7 @@ describe('starting a new plan', () => {
   it('reads the limiting latitude as navigators write it and never shows NaN', async () => {
     const page = await browser.newPage(1440, 900)
     await signIn(page, 'planner')
-    await page.goto('/plans/new')
+    await openPage(page, '/plans/new')
     await page.getByTestId('new-plan-form').waitFor()
     const limit = page.getByLabel('Limiting latitude (optional)')
     await limit.fill('fifty')
@@ -51,7 +51,7 @@ describe('starting a new plan', () => {
   it('starts from the departure place alone, and a new row goes where it makes sense', async () => {
     const page = await browser.newPage(1440, 900)
     await signIn(page, 'planner')
-    await page.goto('/plans/new')
+    await openPage(page, '/plans/new')
     await page.getByTestId('new-plan-form').waitFor()
     await page.getByLabel('Title').fill('Departure only, Yokohama')
     await page.getByLabel('Departure place', { exact: true }).selectOption({ label: 'Yokohama (JPYOK)' })
@@ -89,7 +89,7 @@ describe('starting a new plan', () => {
     // Without startFromPlaces the list starts empty; the first row goes to the departure, the next to the arrival.
     const page = await browser.newPage(1440, 900)
     await signIn(page, 'planner')
-    await page.goto(`/plans/${created.body.id}`)
+    await openPage(page, `/plans/${created.body.id}`)
     await page.getByTestId('plan-workspace').waitFor()
     const rows = page.getByTestId('waypoint-row')
     expect(await rows.count()).toBe(0)

@@ -40,7 +40,7 @@ describe('quick solver', () => {
     page.on('pageerror', e => errors.push(e.message))
     page.on('console', m => { if (m.type() === 'error') errors.push(m.text()) })
     await signIn(page, 'planner')
-    await page.goto('/solver')
+    await openPage(page, '/solver')
     await page.getByTestId('solver-results').waitFor()
     const vertex = page.getByTestId('solver-vertex')
 
@@ -61,7 +61,7 @@ describe('quick solver', () => {
   it('fits a phone: no sideways scroll, the answers straight after the two positions', async () => {
     const page = await browser.newPage(390, 844)
     await signIn(page, 'planner')
-    await page.goto('/solver')
+    await openPage(page, '/solver')
     await page.getByTestId('solver-results').waitFor()
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390)
     const top = async (id: string) => (await page.getByTestId(id).boundingBox())!.y

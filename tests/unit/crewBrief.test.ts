@@ -36,7 +36,7 @@ describe('crew brief', () => {
     const brief = composeCrewBrief(v, vessel)
     expect(brief.subject).toMatch(/approved$/)
     expect(brief.text).toContain('APPROVED by Capt. Invented Person on 2026-12-08 09:15Z (revision 2)')
-    expect(brief.text).toContain('2026-12-10 02:00Z; 2026-12-10 11:00 local (Asia/Tokyo)')
+    expect(brief.text).toContain('2026-12-10 02:00Z; 2026-12-10 11:00 port time (Asia/Tokyo)')
     expect(brief.text).toContain(`${v.totals.distanceNm.toFixed(1)} nm in 2 legs`)
     expect(brief.text).toContain('America/Vancouver')
     for (const c of ALL_CAUTIONS) expect(brief.text).toContain(c)

@@ -6,14 +6,14 @@ const plan = (status: 'draft' | 'submitted' | 'approved' | 'returned') => ({ sta
 
 describe('actions the workspace offers', () => {
   it.each([
-    ['planner', 1, 'draft', ['submit', 'brief', 'remark']],
-    ['planner', 1, 'submitted', ['brief', 'remark']],
+    ['planner', 1, 'draft', ['submit', 'remark']],
+    ['planner', 1, 'submitted', ['remark']],
     ['planner', 1, 'approved', ['revise', 'brief', 'remark']],
-    ['planner', 1, 'returned', ['submit', 'brief', 'remark']],
-    ['master', MASTER_ID, 'submitted', ['approve', 'return', 'brief', 'remark']],
-    ['master', 4, 'submitted', ['brief', 'remark']],
+    ['planner', 1, 'returned', ['submit', 'remark']],
+    ['master', MASTER_ID, 'submitted', ['approve', 'return', 'remark']],
+    ['master', 4, 'submitted', ['remark']],
     ['master', MASTER_ID, 'approved', ['revise', 'brief', 'remark']],
-    ['shore', 5, 'submitted', ['brief', 'remark']],
+    ['shore', 5, 'submitted', ['remark']],
     ['shore', 5, 'approved', ['brief', 'remark']],
     ['admin', 6, 'draft', ['remark']],
     ['admin', 6, 'approved', ['remark']],
@@ -22,6 +22,6 @@ describe('actions the workspace offers', () => {
   })
 
   it('offers no sign-off to a master when the vessel has none assigned', () => {
-    expect(allowedPlanActions({ status: 'submitted', masterUserId: null }, { id: MASTER_ID, role: 'master' })).toEqual(['brief', 'remark'])
+    expect(allowedPlanActions({ status: 'submitted', masterUserId: null }, { id: MASTER_ID, role: 'master' })).toEqual(['remark'])
   })
 })

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { formatUtc, parseUtcText } from '../../shared/utils/timeFormat'
+import { formatPlaceTime, formatUtc, parseUtcText } from '../../shared/utils/timeFormat'
 
 describe('UTC times typed as in a log (ISO 8601 calendar dates, 24-hour clock)', () => {
   const accepted: [string, string][] = [
@@ -25,5 +25,17 @@ describe('UTC times typed as in a log (ISO 8601 calendar dates, 24-hour clock)',
   it('reads back what it shows', () => {
     const iso = '2026-12-03T14:00:00.000Z'
     expect(parseUtcText(formatUtc(iso))).toBe(iso)
+  })
+})
+
+describe('the time at a place says whether it is port time or nautical zone time', () => {
+  // Singapore keeps UTC+8 (IANA tz database) though its longitude gives zone −7 (US Navy zone-time rule).
+  it('names the port\'s civil zone', () => {
+    expect(formatPlaceTime('2026-12-13T11:16:00Z', 'Asia/Singapore')).toBe('2026-12-13 19:16 port time (Asia/Singapore)')
+  })
+  it('reads IANA Etc/GMT-8 as UTC+8 (POSIX sign, reversed; IANA tz database, etcetera file)', () => {
+    expect(formatPlaceTime('2026-12-13T11:16:00Z', 'Etc/GMT-8')).toBe('2026-12-13 19:16 zone time (UTC+8)')
+    expect(formatPlaceTime('2026-12-13T11:16:00Z', 'Etc/GMT+10')).toBe('2026-12-13 01:16 zone time (UTC−10)')
+    expect(formatPlaceTime('2026-12-13T11:16:00Z', 'Etc/GMT')).toBe('2026-12-13 11:16 zone time (UTC)')
   })
 })
