@@ -109,3 +109,9 @@ start_mail_fake() {
 }
 
 run_db() { node "$ROOT/node_modules/jiti/lib/jiti-cli.mjs" "$ROOT/scripts/db.ts" "$@"; }
+
+# The sea router's graph (Natural Earth 1:10m), built once per set of inputs into .data/routing.
+ensure_sea_graph() {
+  export PW_ROUTING_CACHE_DIR="${PW_ROUTING_CACHE_DIR:-$DATA/routing}"
+  node "$ROOT/scripts/bundled.mjs" "$ROOT/scripts/routing-graph.ts" || die "the sea graph could not be built"
+}

@@ -25,6 +25,7 @@ trap cleanup EXIT INT TERM
 
 run_db migrate
 run_db seed-if-empty
+ensure_sea_graph
 log "building the app"
 npx nuxt build >"$DATA/build.log" 2>&1 || { tail -40 "$DATA/build.log"; die "build failed (see .data/build.log)"; }
 log "serving on http://localhost:$PORT"

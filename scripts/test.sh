@@ -26,6 +26,7 @@ trap cleanup EXIT INT TERM
 
 run_db migrate
 run_db seed
+ensure_sea_graph
 log "building the app for the tests"
 npx nuxt build >"$DATA/build-test.log" 2>&1 || { tail -60 "$DATA/build-test.log"; die "build failed"; }
 log "type check (vue-tsc --build --noEmit)"

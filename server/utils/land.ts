@@ -50,9 +50,9 @@ const GRID_NY = Math.ceil((90 - GRID_Y0) / GRID) + 2
 
 let land: LandData | undefined
 
-/** The indexed land polygons, built on first use (about 0.2 s). */
+/** The indexed 1:50m land polygons, built on first use (about 0.2 s). */
 export function landData(): LandData {
-  land ??= buildLandData()
+  land ??= buildLandData(land50m as unknown as Topology)
   return land
 }
 
@@ -98,8 +98,7 @@ function placeRing(ring: PlanarRing): PlanarRing[] {
   return [placed, { xy: placed.xy.map((v, i) => (i % 2 === 0 ? v - 360 : v)), cut: ring.cut }]
 }
 
-function landRings(): PlanarRing[] {
-  const topo = land50m as unknown as Topology
+function landRings(topo: Topology): PlanarRing[] {
   const collection = feature(topo, topo.objects.land!) as unknown as FeatureCollection<Polygon | MultiPolygon>
   const rings: PlanarRing[] = []
   for (const f of collection.features) {
@@ -114,8 +113,9 @@ function landRings(): PlanarRing[] {
   return rings
 }
 
-function buildLandData(): LandData {
-  const planar = landRings()
+/** Indexes the land of a Natural Earth topology (object `land`); the sea router uses it for 1:10m. */
+export function buildLandData(topo: Topology): LandData {
+  const planar = landRings(topo)
   const rings = planar.map(r => Float64Array.from(r.xy))
   const ringEdge = new Uint32Array(rings.length)
   let edgeCount = 0
@@ -169,7 +169,7 @@ function orient(ax: number, ay: number, bx: number, by: number, cx: number, cy: 
 }
 
 /** Parameter t in [0, 1] along a→b where it crosses edge e, or -1 (half-open at vertices so parity stays right). */
-function crossingParam(d: LandData, e: number, ax: number, ay: number, bx: number, by: number): number {
+export function crossingParam(d: LandData, e: number, ax: number, ay: number, bx: number, by: number): number {
   const x1 = d.edges[4 * e]!, y1 = d.edges[4 * e + 1]!, x2 = d.edges[4 * e + 2]!, y2 = d.edges[4 * e + 3]!
   if ((orient(ax, ay, bx, by, x1, y1) > 0) === (orient(ax, ay, bx, by, x2, y2) > 0)) return -1
   const o3 = orient(x1, y1, x2, y2, ax, ay), o4 = orient(x1, y1, x2, y2, bx, by)
@@ -179,7 +179,10 @@ function crossingParam(d: LandData, e: number, ax: number, ay: number, bx: numbe
 
 /** Point in land: even-odd walk from the grid corner south-west of the point (ray crossing, Shimrat 1962). */
 export function isLand(lat: number, lon: number): boolean {
-  const d = landData()
+  return isLandIn(landData(), lat, lon)
+}
+
+export function isLandIn(d: LandData, lat: number, lon: number): boolean {
   const x = normaliseLongitude(lon), y = Math.max(-90, Math.min(90, lat))
   const i = Math.floor((x - GRID_X0) / GRID), j = Math.floor((y - GRID_Y0) / GRID)
   const cx = GRID_X0 + i * GRID, cy = GRID_Y0 + j * GRID
@@ -190,7 +193,7 @@ export function isLand(lat: number, lon: number): boolean {
   return inside
 }
 
-interface Nearest { d2: number, edge: number, t: number }
+export interface Nearest { d2: number, edge: number, t: number }
 
 /** Squared distance (degrees of latitude) from the origin to edge e, in the point's local equirectangular frame. */
 function edgeDistance(d: LandData, e: number, px: number, py: number, cosP: number, out: Nearest): void {
@@ -232,11 +235,14 @@ function descend(d: LandData, px: number, py: number, cosP: number, best: Neares
   }
 }
 
-/** Nearest coastline edge to a point; `hint` (an edge near the previous point) seeds the bound. */
-function nearestCoast(d: LandData, p: LatLon, hint: number): Nearest {
+/**
+ * Nearest coastline edge to a point; `hint` (an edge near the previous point) seeds the bound.
+ * With `maxDeg` only edges closer than that many degrees of latitude are looked for (edge -1 when none is).
+ */
+export function nearestCoast(d: LandData, p: LatLon, hint: number, maxDeg = Infinity): Nearest {
   const px = normaliseLongitude(p.lon), py = p.lat
   const cosP = Math.cos((py * Math.PI) / 180)
-  const best: Nearest = { d2: Infinity, edge: -1, t: 0 }
+  const best: Nearest = { d2: maxDeg * maxDeg, edge: -1, t: 0 }
   if (hint >= 0) edgeDistance(d, hint, px, py, cosP, best)
   descend(d, px, py, cosP, best)
   const toSeam = (180 - Math.abs(px)) * cosP
@@ -249,7 +255,7 @@ function nearestCoast(d: LandData, p: LatLon, hint: number): Nearest {
   return best
 }
 
-function pointOnEdge(d: LandData, n: Nearest): LatLon {
+export function pointOnEdge(d: LandData, n: Nearest): LatLon {
   const e = n.edge
   const lon = d.edges[4 * e]! + n.t * (d.edges[4 * e + 2]! - d.edges[4 * e]!)
   const lat = d.edges[4 * e + 1]! + n.t * (d.edges[4 * e + 3]! - d.edges[4 * e + 1]!)

@@ -22,6 +22,8 @@ export const RULES: Record<string, { roles: Role[] | 'open', record?: 'plan' | '
   'POST /api/geodesy/composite': { roles: ALL },
   'POST /api/geodesy/cross-track': { roles: ALL },
   'POST /api/land-check': { roles: ALL },
+  'GET /api/routing/passages': { roles: ALL },
+  'POST /api/routing/sea': { roles: ALL },
   'GET /api/timezone': { roles: ALL },
   'GET /api/outbox': { roles: ALL },
   'GET /api/places': { roles: ALL },

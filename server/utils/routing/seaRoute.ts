@@ -1,0 +1,185 @@
+// A sea route between two positions: ends placed on navigable water and joined to the graph, A*
+// over the graph under the clearance, limiting latitude, avoided passages and areas, then the path
+// smoothed into geodesic legs. distanceNm is the sum of Karney geodesics between the waypoints.
+import { G, geod } from '#shared/utils/engine/wgs84'
+import { normaliseLongitude } from '#shared/utils/position'
+import {
+  DEFAULT_ROUTE_CLEARANCE_NM, DEFAULT_ROUTE_LIMIT_LAT,
+  type RouteWaypoint, type SeaRouteOptions, type SeaRouteResult,
+} from '#shared/types/routing'
+import { PASSAGES } from '#shared/utils/routing/passages'
+import type { LatLon } from '#shared/types/geo'
+import { prepareAreas } from './areas'
+import type { PreparedAreas } from './areas'
+import { coastDistanceNm } from './coast'
+import { EndError, joinEnd, placeEnd } from './ends'
+import type { RouteEnd } from './ends'
+import { aStar } from './search'
+import type { CostModel } from './search'
+import type { SeaGraph } from './seaGraph'
+import { smoothPath } from './smooth'
+import type { PathPoint } from './smooth'
+import { rasterLowerBoundNm } from './visibility'
+
+
+export class NoRouteError extends Error {}
+export { EndError }
+
+export interface RouteQuery {
+  clearanceNm: number
+  limitLat: number
+  avoid: Set<number>
+  areas: PreparedAreas
+  model: CostModel
+  crossesAvoided: (lat1: number, lon1: number, lat2: number, lon2: number) => boolean
+  release: () => void
+}
+
+function gateCrossed(p: number, lat1: number, lon1: number, lat2: number, lon2: number): boolean {
+  const [[la1, lo1], [la2, lo2]] = PASSAGES[p]!.gate
+  const x2 = lon1 + normaliseLongitude(lon2 - lon1)
+  const o = (ax: number, ay: number, bx: number, by: number, cx: number, cy: number) => (bx - ax) * (cy - ay) - (by - ay) * (cx - ax)
+  return (o(lo1, la1, lo2, la2, lon1, lat1) > 0) !== (o(lo1, la1, lo2, la2, x2, lat2) > 0)
+    && (o(lon1, lat1, x2, lat2, lo1, la1) > 0) !== (o(lon1, lat1, x2, lat2, lo2, la2) > 0)
+}
+
+const blockedByGraph = new WeakMap<SeaGraph, Uint8Array>()
+
+/** The cost model of one query; call release() when done (the blocked-edge flags are shared per graph). */
+export function prepareQuery(g: SeaGraph, opts: SeaRouteOptions): RouteQuery {
+  const clearanceNm = opts.clearanceNm ?? DEFAULT_ROUTE_CLEARANCE_NM
+  const limitLat = opts.limitLat ?? DEFAULT_ROUTE_LIMIT_LAT
+  const avoid = new Set((opts.avoid ?? []).map(id => PASSAGES.findIndex(p => p.id === id)).filter(i => i >= 0))
+  const areas = prepareAreas(g, opts.areas)
+  let blocked = blockedByGraph.get(g)
+  if (!blocked) { blocked = new Uint8Array(g.targets.length); blockedByGraph.set(g, blocked) }
+  const marked: number[] = []
+  const mark = (k: number) => { if (!blocked![k]) { blocked![k] = 1; marked.push(k) } }
+  for (const p of avoid) for (const k of g.gateEdges[p]!) mark(k)
+  if (avoid.size) for (let k = 0; k < g.passage.length; k++) if (g.passage[k] && avoid.has(g.passage[k]! - 1)) mark(k)
+  for (const k of areas.blockedEdges) mark(k)
+  const crossesAvoided = (lat1: number, lon1: number, lat2: number, lon2: number) => {
+    for (const p of avoid) if (gateCrossed(p, lat1, lon1, lat2, lon2)) return true
+    return false
+  }
+  return {
+    clearanceNm, limitLat, avoid, areas, crossesAvoided,
+    model: { clearanceNm: Math.max(clearanceNm, 0.01), limitLat, blockedEdge: marked.length ? blocked : undefined, nodeFactor: areas.nodeFactor },
+    release: () => { for (const k of marked) blocked![k] = 0 },
+  }
+}
+
+function edgeBetween(g: SeaGraph, u: number, v: number): number {
+  for (let k = g.offsets[u]!; k < g.offsets[u + 1]!; k++) if (g.targets[k] === v) return k
+  return -1
+}
+
+export function karneyNm(a: LatLon, b: LatLon): number {
+  return geod.Inverse(a.lat, a.lon, b.lat, b.lon, G.DISTANCE).s12! / 1852
+}
+
+/** Closest approach (nm) of the legs to the coastline, legs inside a passage's fairway left out; exact where the raster cannot rule land out. */
+function minClearance(g: SeaGraph, pts: RouteWaypoint[], capNm: number): number {
+  let best = capNm
+  for (let i = 0; i + 1 < pts.length; i++) {
+    const a = pts[i]!, b = pts[i + 1]!
+    if (a.passageId && a.passageId === b.passageId) continue
+    const line = geod.InverseLine(a.lat, a.lon, b.lat, b.lon, G.LATITUDE | G.LONGITUDE | G.DISTANCE_IN)
+    const n = Math.max(1, Math.ceil(line.s13 / 1852))
+    let hint = -1
+    for (let k = 0; k <= n; k++) {
+      const p = k === 0 ? { lat2: a.lat, lon2: a.lon } : k === n ? { lat2: b.lat, lon2: b.lon } : line.Position((line.s13 * k) / n, G.LATITUDE | G.LONGITUDE)
+      if (rasterLowerBoundNm(g.raster, p.lat2!, p.lon2!) >= best) continue
+      const c = coastDistanceNm(g.land, p.lat2!, p.lon2!, best, hint)
+      hint = c.edge
+      if (c.nm < best) best = c.nm
+    }
+  }
+  return best
+}
+
+function viaOf(pts: RouteWaypoint[]): { id: string, name: string }[] {
+  const used = new Set<number>()
+  for (const w of pts) if (w.passageId) used.add(PASSAGES.findIndex(p => p.id === w.passageId))
+  for (let i = 0; i + 1 < pts.length; i++) {
+    const a = pts[i]!, b = pts[i + 1]!
+    const line = geod.InverseLine(a.lat, a.lon, b.lat, b.lon, G.LATITUDE | G.LONGITUDE | G.DISTANCE_IN)
+    const n = Math.max(1, Math.ceil(line.s13 / 1852 / 20))
+    let prev = { lat: a.lat, lon: a.lon }
+    for (let k = 1; k <= n; k++) {
+      const p = k === n ? { lat: b.lat, lon: b.lon } : (({ lat2, lon2 }) => ({ lat: lat2!, lon: lon2! }))(line.Position((line.s13 * k) / n, G.LATITUDE | G.LONGITUDE))
+      PASSAGES.forEach((_, pi) => { if (!used.has(pi) && gateCrossed(pi, prev.lat, prev.lon, p.lat, p.lon)) used.add(pi) })
+      prev = p
+    }
+  }
+  // In the order the route meets them.
+  const order = (pi: number) => {
+    const i = pts.findIndex(w => w.passageId === PASSAGES[pi]!.id)
+    return i >= 0 ? i : 0
+  }
+  return [...used].sort((x, y) => order(x) - order(y)).map(pi => ({ id: PASSAGES[pi]!.id, name: PASSAGES[pi]!.name }))
+}
+
+/** The waypoints of a route through the graph path between two placed ends. */
+export function routeThrough(g: SeaGraph, q: RouteQuery, from: RouteEnd, to: RouteEnd, nodes: number[]): RouteWaypoint[] {
+  const points: (PathPoint & { passage: number })[] = [
+    { lat: from.lat, lon: from.lon, fixed: false, passage: 0 },
+    ...nodes.map(v => ({ lat: g.lat[v]!, lon: g.lon[v]!, fixed: g.nodePassage[v]! > 0, passage: g.nodePassage[v]! })),
+    { lat: to.lat, lon: to.lon, fixed: false, passage: 0 },
+  ]
+  const segmentClearNm: number[] = []
+  segmentClearNm.push(Math.min(from.clearNm, g.clearNm[nodes[0]!]!))
+  for (let i = 0; i + 1 < nodes.length; i++) segmentClearNm.push(g.edgeClearNm[edgeBetween(g, nodes[i]!, nodes[i + 1]!)] ?? 0)
+  segmentClearNm.push(Math.min(to.clearNm, g.clearNm[nodes[nodes.length - 1]!]!))
+  const kept = smoothPath(points, { sight: g.sight, clearanceNm: q.clearanceNm, limitLat: q.limitLat, segmentClearNm, crossesAvoided: q.crossesAvoided, areas: q.areas })
+  const counters = new Map<number, number>()
+  let n = 0
+  return kept.map((i, k) => {
+    const p = points[i]!
+    let name: string
+    if (k === 0) name = 'Departure'
+    else if (k === kept.length - 1) name = 'Arrival'
+    else if (p.passage) {
+      const c = (counters.get(p.passage) ?? 0) + 1
+      counters.set(p.passage, c)
+      name = `${PASSAGES[p.passage - 1]!.name} ${c}`
+    }
+    else name = `SR ${String(++n).padStart(2, '0')}`
+    const w: RouteWaypoint = { name, lat: p.lat, lon: normaliseLongitude(p.lon), method: 'geodesic' }
+    if (p.passage) w.passageId = PASSAGES[p.passage - 1]!.id
+    return w
+  })
+}
+
+/** The answer for a list of waypoints (distances by Karney's geodesics). */
+export function describeRoute(g: SeaGraph, q: RouteQuery, waypoints: RouteWaypoint[], moved: SeaRouteResult['moved']): SeaRouteResult {
+  let distanceNm = 0
+  for (let i = 0; i + 1 < waypoints.length; i++) distanceNm += karneyNm(waypoints[i]!, waypoints[i + 1]!)
+  return {
+    distanceNm, distanceM: distanceNm * 1852, geodesicNm: karneyNm(waypoints[0]!, waypoints[waypoints.length - 1]!),
+    via: viaOf(waypoints), waypoints, moved, minClearanceNm: minClearance(g, waypoints, 50),
+    clearanceNm: q.clearanceNm, limitLat: q.limitLat,
+  }
+}
+
+export function seaRoute(g: SeaGraph, fromPos: LatLon, toPos: LatLon, opts: SeaRouteOptions = {}): SeaRouteResult {
+  const q = prepareQuery(g, opts)
+  try {
+    for (const [field, p] of [['from', fromPos], ['to', toPos]] as const) {
+      if (Math.abs(p.lat) > q.limitLat) throw new EndError(field, `${field} lies beyond the limiting latitude ${q.limitLat}°`)
+    }
+    const from = placeEnd(g, 'from', fromPos.lat, fromPos.lon)
+    const to = placeEnd(g, 'to', toPos.lat, toPos.lon)
+    const moved: SeaRouteResult['moved'] = {}
+    if (from.movedNm > 0) moved.from = from.movedNm
+    if (to.movedNm > 0) moved.to = to.movedNm
+    const sources = joinEnd(g, from, q.clearanceNm, q.limitLat)
+    if (!sources.length) throw new EndError('from', `from lies more than ${20} nm from the navigable graph`)
+    const targets = joinEnd(g, to, q.clearanceNm, q.limitLat)
+    if (!targets.length) throw new EndError('to', `to lies more than ${20} nm from the navigable graph`)
+    const path = aStar(g, sources, targets, to, q.model)
+    if (!path) throw new NoRouteError('No sea route joins from and to under these settings')
+    return describeRoute(g, q, routeThrough(g, q, from, to, path.nodes), moved)
+  }
+  finally { q.release() }
+}
