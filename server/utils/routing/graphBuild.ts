@@ -200,4 +200,4 @@ export function packEdges(n: number, e: EdgeList): Csr {
   return { offsets, targets, lengthNm, edgeClearNm, passage }
 }
 
-export { edgeLengthNm, segmentCrossesLand, wrapLon }
+export { edgeLengthNm, segmentCrossesLand }
