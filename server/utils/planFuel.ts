@@ -1,16 +1,20 @@
-import type { FuelReserve } from '#shared/types/fuel'
 import type { PlanFuel } from '#shared/types/planView'
-import { fitFuelCurve, planFuel, type FuelCurve } from '#shared/utils/fuel'
+import { fitFuelCurve, planFuel } from '#shared/utils/fuel'
+import { DEFAULT_FUEL_GRADES, fuelByGrade } from '#shared/utils/zones/fuelSplit'
+import type { LegZoneDistance } from '#shared/utils/zones/types'
 
 
 /**
  * Fuel per leg and for the plan from the vessel's fitted curve and the company's reserve margin;
  * null when the vessel has fewer than two fuel points (no curve to fit).
  */
-export async function fuelForPlan(companyId: number, vesselId: number, legs: readonly { speedKn: number, hours: number }[]): Promise<PlanFuel | null> {
+export async function fuelForPlan(companyId: number, vesselId: number, legs: readonly { speedKn: number, hours: number, distanceNm: number }[], legZones: readonly LegZoneDistance[][] = []): Promise<PlanFuel | null> {
   const points = await loadFuelPoints(vesselId)
   if (points.length < 2) return null
   const curve = fitFuelCurve(points)
-  const { reserve } = await getCompanySettings(companyId)
-  return { curve, reserve, ...planFuel(curve, legs, reserve) }
+  const { reserve, fuelPrices, currency } = await getCompanySettings(companyId)
+  const fuel = planFuel(curve, legs, reserve)
+  const grades = await useDb()('vessel_fuel_grades').where({ vessel_id: vesselId }).first('outside', 'inside_eca as insideEca')
+  const byGrade = fuelByGrade(fuel.legTonnes, legs, legZones, fuel.reserveTonnes, grades ?? DEFAULT_FUEL_GRADES, fuelPrices ?? [])
+  return { curve, reserve, ...fuel, byGrade, currency: currency ?? 'USD' }
 }

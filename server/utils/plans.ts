@@ -69,9 +69,11 @@ export async function getPlanView(user: SessionUser, id: number): Promise<PlanVi
   // Without a departure or arrival place, the time zone comes from the first or last waypoint's position.
   plan.departureTimeZone ??= waypoints.length ? timeZoneAt(waypoints[0]!.lat, waypoints[0]!.lon) : null
   plan.arrivalTimeZone ??= waypoints.length > 1 ? timeZoneAt(waypoints.at(-1)!.lat, waypoints.at(-1)!.lon) : null
-  const { legs, totals } = legTableFor(plan, waypoints)
-  const fuel = await fuelForPlan(user.companyId, plan.vesselId, legs)
-  return { plan, waypoints, legs, totals, fuel, events: await listEvents(id) }
+  const table = legTableFor(plan, waypoints)
+  const zones = await zonesForLegs(user.companyId, table.legs)
+  const legs = table.legs.map((l, i) => ({ ...l, zones: zones.legs[i]! }))
+  const fuel = await fuelForPlan(user.companyId, plan.vesselId, table.legs, zones.legs)
+  return { plan, waypoints, legs, totals: { ...table.totals, zones: zones.totals }, fuel, events: await listEvents(id) }
 }
 
 export async function recordEvent(db: Knex | Knex.Transaction, planId: number, user: SessionUser, kind: string, from: string | null, to: string | null, remarks: string | null = null) {

@@ -5,6 +5,9 @@ import type { LegTableTotals, PlanLeg } from '../utils/legTable'
 import type { FuelReserve } from './fuel'
 import type { PlanDetail, PlanEvent } from './plan'
 import type { Waypoint } from './waypoint'
+import type { FuelByGrade } from '../utils/zones/fuelSplit'
+import type { PlanZoneTotals } from '../utils/zones/legZones'
+import type { LegZoneDistance } from '../utils/zones/types'
 
 /** Fuel per leg and for the plan from the vessel's fitted curve and the company's reserve margin. */
 export interface PlanFuel {
@@ -14,13 +17,20 @@ export interface PlanFuel {
   reserve: FuelReserve
   reserveTonnes: number
   withReserveTonnes: number
+  /** Tonnes and cost by fuel grade: the vessel's ECA grade for the distance inside ECAs. */
+  byGrade: FuelByGrade[]
+  currency: string
 }
+
+/** The plan's distance inside each zone and kind, and whether it enters a no-go or risk area. */
+export interface PlanViewZones extends PlanZoneTotals { entersNoGo: boolean, entersRisk: boolean }
 
 export interface PlanView {
   plan: PlanDetail
   waypoints: Waypoint[]
-  legs: PlanLeg[]
-  totals: LegTableTotals
+  /** Each leg with its distance inside every zone it enters. */
+  legs: (PlanLeg & { zones: LegZoneDistance[] })[]
+  totals: LegTableTotals & { zones: PlanViewZones }
   /** Null when the vessel has fewer than two fuel points (no curve to fit). */
   fuel: PlanFuel | null
   events: PlanEvent[]

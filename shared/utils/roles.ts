@@ -18,6 +18,8 @@ export const ADMIN_ONLY = ['admin'] as const satisfies RoleSet
 export const BRIEF_SENDERS = ['planner', 'master', 'shore'] as const satisfies RoleSet
 /** Add a remark to a plan's history. */
 export const REMARKERS = ALL_ROLES
+/** Upload, change and delete zones (ECAs, no-go, risk and own areas). */
+export const ZONE_KEEPERS = SHORE_DESK
 /** Build, rebuild and delete distance tables. */
 export const TABLE_BUILDERS = SHORE_DESK
 
@@ -35,3 +37,4 @@ export const canEditPlaces = (user: Someone) => hasRole(user, SHORE_DESK)
 export const canEditFuel = (user: Someone) => hasRole(user, SHORE_DESK)
 export const canBuildTables = (user: Someone) => hasRole(user, TABLE_BUILDERS)
 export const canAdminister = (user: Someone) => hasRole(user, ADMIN_ONLY)
+export const canEditZones = (user: Someone) => hasRole(user, ZONE_KEEPERS)

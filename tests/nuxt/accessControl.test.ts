@@ -22,6 +22,7 @@ describe('access control, every route × every caller', () => {
     kestrelIds.plan = (await users.planner!.request('/api/plans')).body[0].id
     kestrelIds.place = (await users.planner!.request('/api/places')).body[0].id
     kestrelIds.vessel = (await users.planner!.request('/api/vessels')).body[0].id
+    kestrelIds.zone = (await users.planner!.request('/api/zones')).body[0].id
     const tables = (await users.shore!.request('/api/tables')).body
     kestrelIds.table = Array.isArray(tables) && tables[0] ? tables[0].id : 1
   })

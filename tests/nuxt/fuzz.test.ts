@@ -46,6 +46,7 @@ describe('fuzzing every JSON route', () => {
       place: (await users.planner.request('/api/places')).body[0].id,
       vessel: (await users.planner.request('/api/vessels')).body[0].id,
       table: 1,
+      zone: (await users.planner.request('/api/zones')).body[0].id,
     }
     const targets = listApiRoutes().filter(r => (r.method === 'POST' || r.method === 'PUT') && !BODYLESS.has(r.key) && RULES[r.key])
     expect(targets.length).toBeGreaterThan(15)

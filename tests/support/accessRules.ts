@@ -8,7 +8,7 @@ export const DESK: Role[] = ['shore', 'admin']
 export const ADMIN: Role[] = ['admin']
 
 /** Who may call each route; 'open' needs no session. `record` names the kind of record in `:id`. */
-export const RULES: Record<string, { roles: Role[] | 'open', record?: 'plan' | 'place' | 'vessel' | 'table' }> = {
+export const RULES: Record<string, { roles: Role[] | 'open', record?: 'plan' | 'place' | 'vessel' | 'table' | 'zone' }> = {
   'GET /api/health': { roles: 'open' },
   'POST /api/auth/login': { roles: 'open' },
   'POST /api/auth/logout': { roles: ALL },
@@ -50,6 +50,10 @@ export const RULES: Record<string, { roles: Role[] | 'open', record?: 'plan' | '
   'DELETE /api/tables/:id': { roles: DESK, record: 'table' },
   'POST /api/tables/:id/rebuild': { roles: DESK, record: 'table' },
   'GET /api/tables/:id/export': { roles: ALL, record: 'table' },
+  'GET /api/zones': { roles: ALL },
+  'POST /api/zones': { roles: DESK },
+  'PUT /api/zones/:id': { roles: DESK, record: 'zone' },
+  'DELETE /api/zones/:id': { roles: DESK, record: 'zone' },
   'GET /api/vessels': { roles: ALL },
   'GET /api/vessels/:id': { roles: ALL, record: 'vessel' },
   'PUT /api/vessels/:id': { roles: ADMIN, record: 'vessel' },
@@ -67,6 +71,7 @@ export const VALID_BODIES: Record<string, unknown> = {
   'POST /api/plans/:id/remarks': { remarks: 'Scope probe' },
   'POST /api/plans/:id/return': { remarks: 'Scope probe' },
   'PUT /api/places/:id': { name: 'Scope probe', kind: 'port', lat: 1, lon: 1 },
+  'PUT /api/zones/:id': { validTo: '2030-01-01' },
   'PUT /api/vessels/:id': { name: 'Scope probe', imoNumber: '9074729', callSign: 'ABC1', serviceSpeedKn: 12, masterUserId: null },
   'PUT /api/vessels/:id/crew': { crew: [{ name: 'Scope probe', rank: 'Cadet', email: 'probe@example.com' }] },
   'PUT /api/vessels/:id/fuel': { points: [{ speedKn: 10, tonnesPerDay: 20 }, { speedKn: 12, tonnesPerDay: 30 }] },

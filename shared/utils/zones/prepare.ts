@@ -16,6 +16,9 @@ type GeodesicLine = ReturnType<typeof geod.InverseLine>
 export interface SubEdge {
   zone: number
   poly: number
+  /** Ring within the polygon (0 = outer) and the edge's place in the ring (from vertex `edge` to `edge + 1`). */
+  ring: number
+  edge: number
   lat1: number
   /** Start longitude; lon2 continues from it (may pass ±180). */
   lon1: number
@@ -76,7 +79,7 @@ function unwrapRing(ring: [number, number][], anchor: number): [number, number][
   return out
 }
 
-function addEdge(out: SubEdge[], zone: number, poly: number, a: [number, number], b: [number, number]) {
+function addEdge(out: SubEdge[], zone: number, poly: number, ring: number, edge: number, a: [number, number], b: [number, number]) {
   const line = geod.InverseLine(a[1], a[0], b[1], b[0], LINE_CAPS)
   const total = line.s13
   if (!(total > 1e-6)) return
@@ -96,7 +99,7 @@ function addEdge(out: SubEdge[], zone: number, poly: number, a: [number, number]
     const latMin = Math.min(lat1, lat2) - bulge
     const latMax = Math.max(lat1, lat2) + bulge
     out.push({
-      zone, poly, lat1, lon1, lat2, lon2, azi1, lengthM, line, t0: total * (j - 1) / parts, lineLon1: lon1, v1, v2,
+      zone, poly, ring, edge, lat1, lon1, lat2, lon2, azi1, lengthM, line, t0: total * (j - 1) / parts, lineLon1: lon1, v1, v2,
       psi1: isometricLat(lat1), psi2: isometricLat(lat2), mercBulge: mercatorBulge(lengthM, latMin, latMax),
       normal: unit3(cross3(v1, v2)), auxMargin: 2.5 * WGS84_F * lengthM / EARTH_R + 1e-12, latMin, latMax,
     })
@@ -113,11 +116,11 @@ function prepareZone(zone: ZoneInput, zoneIndex: number, edges: SubEdge[]): Prep
   let lonMax = -Infinity
   zone.polygons.forEach((rings, poly) => {
     const anchor = rings[0]?.[0]?.[0] ?? 0
-    for (const raw of rings) {
+    rings.forEach((raw, r) => {
       const ring = unwrapRing(raw, anchor)
       for (const [lon] of ring) { lonMin = Math.min(lonMin, lon); lonMax = Math.max(lonMax, lon) }
-      for (let i = 1; i < ring.length; i++) addEdge(edges, zoneIndex, poly, ring[i - 1]!, ring[i]!)
-    }
+      for (let i = 1; i < ring.length; i++) addEdge(edges, zoneIndex, poly, r, i - 1, ring[i - 1]!, ring[i]!)
+    })
   })
   const shift = Number.isFinite(lonMin) ? wrap180(lonMin) - lonMin : 0
   let latMin = Infinity

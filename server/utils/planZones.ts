@@ -1,0 +1,13 @@
+// The zone step of a plan read: per-leg distances inside the company's zones, computed at read time
+// from the cached prepared zones (zones change apart from plans), with sums by zone and by kind.
+import type { LegZoneDistance } from '#shared/utils/zones/types'
+import type { PlanViewZones } from '#shared/types/planView'
+import { planZoneDistances, type ZoneTableLeg } from '#shared/utils/zones/legZones'
+
+export interface PlanZones { legs: LegZoneDistance[][], totals: PlanViewZones }
+
+export async function zonesForLegs(companyId: number, legs: readonly ZoneTableLeg[]): Promise<PlanZones> {
+  const { prepared } = await companyZones(companyId)
+  const { legs: perLeg, totals } = planZoneDistances(prepared, legs)
+  return { legs: perLeg, totals: { ...totals, entersNoGo: totals.byZone.some(z => z.kind === 'no-go'), entersRisk: totals.byZone.some(z => z.kind === 'risk') } }
+}
