@@ -7,11 +7,13 @@ import { ALL_CAUTIONS } from '#shared/utils/cautions'
 import { formatPlaceTime, formatUtc } from '#shared/utils/timeFormat'
 import { formatZoneDescription, zoneTime } from '#shared/utils/manoeuvre'
 import { formatLimitLatitude, formatPosition } from '#shared/utils/position'
+import type { LegZoneDistance } from '#shared/utils/zones/types'
 
 export interface BriefVessel { name: string, imoNumber: string, callSign: string }
 export interface CrewBrief { subject: string, text: string, html: string }
 
-const LEG_HEADERS = ['Leg', 'To', 'Position', 'Sailing', 'Course °T', 'Dist nm', 'Speed kn', 'Time', 'ETA UTC', 'ETA ship\'s zone time']
+const LEG_HEADERS = ['Leg', 'To', 'Position', 'Sailing', 'Course °T', 'Dist nm', 'Speed kn', 'Time', 'ETA UTC', 'ETA ship\'s zone time', 'In zones nm']
+const KIND_SHORT = { 'eca': 'ECA', 'no-go': 'NO-GO', 'risk': 'risk', 'custom': 'own' } as const
 
 const course = (c: number) => `${c.toFixed(1).padStart(5, '0')}`
 function formatDuration(hours: number): string {
@@ -22,11 +24,12 @@ function formatDuration(hours: number): string {
   return `${d ? `${d}d ` : ''}${String(h).padStart(2, '0')}h ${String(m).padStart(2, '0')}m`
 }
 
-function legCells(leg: PlanLeg): string[] {
+function legCells(leg: PlanLeg & { zones?: LegZoneDistance[] }): string[] {
   const courses = leg.method === 'geodesic' ? `${course(leg.initialCourse)}→${course(leg.finalCourse)}` : course(leg.course)
   const zone = `${zoneTime(leg.etaUtc, leg.zoneDescription)} (ZD ${formatZoneDescription(leg.zoneDescription)})`
   return [String(leg.index + 1), leg.toName || `WP ${leg.index + 2}`, formatPosition(leg.to, 1), leg.method === 'geodesic' ? 'geodesic' : 'rhumb line',
-    courses, leg.distanceNm.toFixed(1), leg.speedKn.toFixed(1), formatDuration(leg.hours), formatUtc(leg.etaUtc), zone]
+    courses, leg.distanceNm.toFixed(1), leg.speedKn.toFixed(1), formatDuration(leg.hours), formatUtc(leg.etaUtc), zone,
+    leg.zones?.length ? leg.zones.map(z => `${KIND_SHORT[z.kind]} ${z.distanceNm.toFixed(1)}`).join(', ') : '—']
 }
 
 const local = (iso: string, zone: string | null) => (zone ? formatPlaceTime(iso, zone) : 'local time not known (no time zone for this place)')
@@ -35,6 +38,17 @@ function approvalLine(plan: PlanView['plan']): { approved: boolean, line: string
   if (plan.status === 'approved' && plan.approvedAt)
     return { approved: true, line: `APPROVED by ${plan.approvedByName ?? 'the master'} on ${formatUtc(plan.approvedAt)} (revision ${plan.revision})` }
   return { approved: false, line: `NOT YET APPROVED: this plan is ${plan.status} (revision ${plan.revision}). Do not navigate by it until the master has approved it.` }
+}
+
+/** Distance inside the company's zones, and the no-go and risk areas the track enters, said plainly. */
+function zoneFacts(view: PlanView): [string, string][] {
+  const zones = view.totals.zones?.byZone ?? []
+  const list = (kind: string) => zones.filter(z => z.kind === kind).map(z => `${z.name} ${z.distanceNm.toFixed(1)} nm`).join('; ')
+  return [
+    ...(zones.some(z => z.kind === 'no-go') ? [['NO-GO AREA', `the track enters ${list('no-go')}`] as [string, string]] : []),
+    ...(zones.some(z => z.kind === 'risk') ? [['Risk area', `the track enters ${list('risk')}`] as [string, string]] : []),
+    ['Inside ECAs', zones.some(z => z.kind === 'eca') ? list('eca') : 'none'],
+  ]
 }
 
 /** The facts of the brief, in reading order, shared by the text and the HTML. */
@@ -50,6 +64,7 @@ function briefFacts(view: PlanView, vessel: BriefVessel) {
     ['Total distance', `${totals.distanceNm.toFixed(1)} nm in ${view.legs.length} legs (saving over rhumb lines ${totals.savingNm.toFixed(1)} nm)`],
     ['Time on passage', `${formatDuration(totals.hours)} at a planned ${plan.speedKn.toFixed(1)} kn`],
     ...(plan.limitLat ? [['Limiting latitude', `${formatLimitLatitude(plan.limitLat)} (north and south)`]] : []),
+    ...zoneFacts(view),
   ] as [string, string][]
 }
 

@@ -3,6 +3,7 @@ import { ZONE_KINDS, type ZoneKind, type ZonePolygons } from '../utils/zones/typ
 
 export { ZONE_KINDS, type ZoneKind }
 export const zoneKindLabels: Record<ZoneKind, string> = { 'eca': 'Emission control area', 'no-go': 'No-go area', 'risk': 'Risk area', 'custom': 'Own area' }
+export const zoneKindShort: Record<ZoneKind, string> = { 'eca': 'ECA', 'no-go': 'No-go', 'risk': 'Risk', 'custom': 'Own' }
 
 export const zoneKindSchema = z.enum(ZONE_KINDS, { error: 'kind must be one of eca, no-go, risk, custom' })
 const dayPattern = /^\d{4}-\d{2}-\d{2}$/
