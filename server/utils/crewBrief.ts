@@ -4,7 +4,7 @@ import type { SessionUser } from '#shared/types/auth'
 import type { PlanView } from '#shared/types/planView'
 import type { PlanLeg } from '#shared/utils/legTable'
 import { ALL_CAUTIONS } from '#shared/utils/cautions'
-import { formatPlaceTime, formatUtc } from '#shared/utils/timeFormat'
+import { formatDuration, formatLegCourse, formatNumber, formatPlaceTime, formatUtc } from '#shared/utils/format'
 import { formatZoneDescription, zoneTime } from '#shared/utils/manoeuvre'
 import { formatLimitLatitude, formatPosition } from '#shared/utils/position'
 import type { LegZoneDistance } from '#shared/utils/zones/types'
@@ -15,21 +15,11 @@ export interface CrewBrief { subject: string, text: string, html: string }
 const LEG_HEADERS = ['Leg', 'To', 'Position', 'Sailing', 'Course °T', 'Dist nm', 'Speed kn', 'Time', 'ETA UTC', 'ETA ship\'s zone time', 'In zones nm']
 const KIND_SHORT = { 'eca': 'ECA', 'no-go': 'NO-GO', 'risk': 'risk', 'custom': 'own' } as const
 
-const course = (c: number) => `${c.toFixed(1).padStart(5, '0')}`
-function formatDuration(hours: number): string {
-  const minutes = Math.round(hours * 60)
-  const d = Math.floor(minutes / 1440)
-  const h = Math.floor((minutes % 1440) / 60)
-  const m = minutes % 60
-  return `${d ? `${d}d ` : ''}${String(h).padStart(2, '0')}h ${String(m).padStart(2, '0')}m`
-}
-
 function legCells(leg: PlanLeg & { zones?: LegZoneDistance[] }): string[] {
-  const courses = leg.method === 'geodesic' ? `${course(leg.initialCourse)}→${course(leg.finalCourse)}` : course(leg.course)
   const zone = `${zoneTime(leg.etaUtc, leg.zoneDescription)} (ZD ${formatZoneDescription(leg.zoneDescription)})`
   return [String(leg.index + 1), leg.toName || `WP ${leg.index + 2}`, formatPosition(leg.to, 1), leg.method === 'geodesic' ? 'geodesic' : 'rhumb line',
-    courses, leg.distanceNm.toFixed(1), leg.speedKn.toFixed(1), formatDuration(leg.hours), formatUtc(leg.etaUtc), zone,
-    leg.zones?.length ? leg.zones.map(z => `${KIND_SHORT[z.kind]} ${z.distanceNm.toFixed(1)}`).join(', ') : '—']
+    formatLegCourse(leg), formatNumber(leg.distanceNm), formatNumber(leg.speedKn), formatDuration(leg.hours), formatUtc(leg.etaUtc), zone,
+    leg.zones?.length ? leg.zones.map(z => `${KIND_SHORT[z.kind]} ${formatNumber(z.distanceNm)}`).join(', ') : '—']
 }
 
 const local = (iso: string, zone: string | null) => (zone ? formatPlaceTime(iso, zone) : 'local time not known (no time zone for this place)')
@@ -43,7 +33,7 @@ function approvalLine(plan: PlanView['plan']): { approved: boolean, line: string
 /** Distance inside the company's zones, and the no-go and risk areas the track enters, said plainly. */
 function zoneFacts(view: PlanView): [string, string][] {
   const zones = view.totals.zones?.byZone ?? []
-  const list = (kind: string) => zones.filter(z => z.kind === kind).map(z => `${z.name} ${z.distanceNm.toFixed(1)} nm`).join('; ')
+  const list = (kind: string) => zones.filter(z => z.kind === kind).map(z => `${z.name} ${formatNumber(z.distanceNm)} nm`).join('; ')
   return [
     ...(zones.some(z => z.kind === 'no-go') ? [['NO-GO AREA', `the track enters ${list('no-go')}`] as [string, string]] : []),
     ...(zones.some(z => z.kind === 'risk') ? [['Risk area', `the track enters ${list('risk')}`] as [string, string]] : []),
@@ -61,8 +51,8 @@ function briefFacts(view: PlanView, vessel: BriefVessel) {
     ['Voyage', `${plan.title}, revision ${plan.revision}`],
     ['Departure', `${first}: ${formatUtc(plan.departureUtc)}; ${local(plan.departureUtc, plan.departureTimeZone)}`],
     ['Arrival', `${last}: ETA ${formatUtc(totals.etaUtc)}; ${local(totals.etaUtc, plan.arrivalTimeZone)}`],
-    ['Total distance', `${totals.distanceNm.toFixed(1)} nm in ${view.legs.length} legs (saving over rhumb lines ${totals.savingNm.toFixed(1)} nm)`],
-    ['Time on passage', `${formatDuration(totals.hours)} at a planned ${plan.speedKn.toFixed(1)} kn`],
+    ['Total distance', `${formatNumber(totals.distanceNm)} nm in ${view.legs.length} legs (saving over rhumb lines ${formatNumber(totals.savingNm)} nm)`],
+    ['Time on passage', `${formatDuration(totals.hours)} at a planned ${formatNumber(plan.speedKn)} kn`],
     ...(plan.limitLat ? [['Limiting latitude', `${formatLimitLatitude(plan.limitLat)} (north and south)`]] : []),
     ...zoneFacts(view),
   ] as [string, string][]

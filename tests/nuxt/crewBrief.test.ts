@@ -119,7 +119,8 @@ describe('delivery', () => {
     expect(mail!.messageId).toBe(queued.messageId)
     for (const body of [mail!.text, mail!.html!]) {
       expect(body).toContain('Kestrel Meridian')
-      expect(body).toContain(`${view.totals.distanceNm.toFixed(1)} nm`)
+      // The plan's distance as the screen writes it: grouped thousands, one decimal.
+      expect(body).toContain(`${view.totals.distanceNm.toLocaleString('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 })} nm`)
       expect(body).toContain('APPROVED by Capt. Mirela Oduya')
       expect(body).toContain('Australia/Perth')
       expect(body.replace(/&#39;/g, '\'')).toContain(PLANNING_CAUTION)

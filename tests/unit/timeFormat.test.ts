@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { formatPlaceTime, formatUtc, parseUtcText } from '../../shared/utils/timeFormat'
+import { formatPlaceTime, formatUtc, parseUtcText } from '../../shared/utils/format'
 
 describe('UTC times typed as in a log (ISO 8601 calendar dates, 24-hour clock)', () => {
   const accepted: [string, string][] = [
