@@ -15,6 +15,20 @@ export interface ChartWaypoint extends LatLon { method?: LegMethod, xteNm?: numb
 
 export interface ChartVertex extends LatLon { legIndex: number }
 
+/**
+ * One leg as drawn, at unwrapped longitudes starting from its first waypoint's. Pieces are kept
+ * between builds, so an unchanged leg is the same object and the chart's layers can skip it.
+ */
+export interface ChartLegPiece {
+  track: LatLon[]
+  rhumb: LatLon[] | null
+  corridor: LatLon[] | null
+  vertex: LatLon | null
+  bounds: { south: number, west: number, north: number, east: number }
+  /** The great ellipse between the leg's ends, made the first time it is asked for (null: antipodal ends). */
+  ellipse?: LatLon[] | null
+}
+
 export interface ChartGeometry {
   /** The planned track, every leg densified by its own method, one continuous unwrapped line. */
   track: LatLon[]
@@ -31,6 +45,8 @@ export interface ChartGeometry {
   /** The limiting parallel across the track's longitudes, in the track's hemisphere. */
   limitParallel: LatLon[] | null
   bounds: { south: number, west: number, north: number, east: number } | null
+  /** The same lines leg by leg (leg i from waypoint i to i + 1). */
+  pieces: ChartLegPiece[]
 }
 
 export interface ChartGeometryOptions {
@@ -92,55 +108,78 @@ function legShape(a: ChartWaypoint, b: ChartWaypoint, stepNm: number): LegShape 
   }
 }
 
-/**
- * A geometry builder that remembers each leg's shape by its ends, method and XTE, so dragging one
- * waypoint of a long plan recomputes only the two legs that touch it.
- */
-export function createChartGeometry() {
-  let cache = new Map<string, LegShape>()
-
-  return function build(waypoints: readonly ChartWaypoint[], options: ChartGeometryOptions = {}): ChartGeometry {
-    const stepNm = options.stepNm ?? 10
-    const next = new Map<string, LegShape>()
-    const shapes: LegShape[] = []
-    for (let i = 1; i < waypoints.length; i++) {
-      const a = waypoints[i - 1]!
-      const b = waypoints[i]!
-      const key = `${a.lat},${a.lon},${b.lat},${b.lon},${b.method ?? 'rhumb'},${b.xteNm ?? ''},${stepNm}`
-      const shape = cache.get(key) ?? next.get(key) ?? legShape(a, b, stepNm)
-      next.set(key, shape)
-      shapes.push(shape)
-    }
-    cache = next
-    return assemble(waypoints, shapes, options)
+/** A leg's shape moved to the world copy where its first waypoint lies at longitude `lon`. */
+function anchorPiece(shape: LegShape, lon: number): ChartLegPiece {
+  const track = anchorAt(shape.track, lon)
+  return {
+    track,
+    rhumb: shape.rhumb ? anchorAt(shape.rhumb, lon) : null,
+    corridor: shape.corridor ? anchorAt(shape.corridor, lon) : null,
+    vertex: shape.vertex ? { lat: shape.vertex.lat, lon: lon + wrapLongitude(shape.vertex.lon - lon) } : null,
+    bounds: boundsOf(track)!,
   }
 }
 
-function assemble(waypoints: readonly ChartWaypoint[], shapes: LegShape[], options: ChartGeometryOptions): ChartGeometry {
-  const joined: LatLon[] = waypoints.length ? [waypoints[0]!] : []
-  const starts: number[] = [0]
-  for (const s of shapes) {
-    for (let k = 1; k < s.track.length; k++) joined.push(s.track[k]!)
-    starts.push(joined.length - 1)
+interface LegMemo { from: ChartWaypoint, stepNm: number, shape: LegShape, lon: number, piece: ChartLegPiece }
+
+/**
+ * A geometry builder that remembers each leg by its two waypoint objects (the draft replaces a
+ * waypoint to change it, never changes one in place), and each drawn piece by its world copy, so
+ * dragging one waypoint of a long plan recomputes only the two legs that touch it and hands the
+ * chart the same objects for every other leg.
+ */
+export function createChartGeometry() {
+  const memo = new WeakMap<ChartWaypoint, LegMemo>()
+
+  return function build(waypoints: readonly ChartWaypoint[], options: ChartGeometryOptions = {}): ChartGeometry {
+    const stepNm = options.stepNm ?? 10
+    const pieces: ChartLegPiece[] = []
+    let lon = waypoints[0]?.lon ?? 0
+    for (let i = 1; i < waypoints.length; i++) {
+      const a = waypoints[i - 1]!
+      const b = waypoints[i]!
+      let m = memo.get(b)
+      if (!m || m.from !== a || m.stepNm !== stepNm) {
+        const shape = legShape(a, b, stepNm)
+        m = { from: a, stepNm, shape, lon, piece: anchorPiece(shape, lon) }
+        memo.set(b, m)
+      }
+      else if (m.lon !== lon) {
+        m = { ...m, lon, piece: anchorPiece(m.shape, lon) }
+        memo.set(b, m)
+      }
+      pieces.push(m.piece)
+      lon = m.piece.track.at(-1)!.lon
+    }
+    return assemble(waypoints, pieces, options)
   }
-  const track = unwrapLongitudes(joined)
-  const marks = starts.slice(0, waypoints.length).map(k => track[k]!).filter(Boolean)
+}
+
+function assemble(waypoints: readonly ChartWaypoint[], pieces: ChartLegPiece[], options: ChartGeometryOptions): ChartGeometry {
+  const track: LatLon[] = pieces.length ? [pieces[0]!.track[0]!] : waypoints.slice(0, 1).map(w => ({ lat: w.lat, lon: w.lon }))
+  const marks: LatLon[] = [...track]
   const rhumbAlternatives: LatLon[][] = []
   const corridors: LatLon[][] = []
   const vertices: ChartVertex[] = []
   const greatEllipses: LatLon[][] = []
-  shapes.forEach((s, i) => {
-    const start = marks[i]!.lon
-    if (s.rhumb) rhumbAlternatives.push(anchorAt(s.rhumb, start))
-    if (s.corridor) corridors.push(anchorAt(s.corridor, start))
-    if (s.vertex) vertices.push({ legIndex: i, lat: s.vertex.lat, lon: start + wrapLongitude(s.vertex.lon - start) })
+  let bounds: ChartGeometry['bounds'] = track.length ? boundsOf(track) : null
+  pieces.forEach((p, i) => {
+    for (let k = 1; k < p.track.length; k++) track.push(p.track[k]!)
+    marks.push(p.track.at(-1)!)
+    if (p.rhumb) rhumbAlternatives.push(p.rhumb)
+    if (p.corridor) corridors.push(p.corridor)
+    if (p.vertex) vertices.push({ legIndex: i, ...p.vertex })
     if (options.greatEllipse) {
-      try { greatEllipses.push(anchorAt(greatEllipseDensify(waypoints[i]!, waypoints[i + 1]!, options.stepNm ?? 10), start)) }
-      catch { /* antipodal ends: no single great ellipse to draw */ }
+      if (p.ellipse === undefined) {
+        try { p.ellipse = anchorAt(greatEllipseDensify(waypoints[i]!, waypoints[i + 1]!, options.stepNm ?? 10), p.track[0]!.lon) }
+        catch { p.ellipse = null } // antipodal ends: no single great ellipse to draw
+      }
+      if (p.ellipse) greatEllipses.push(p.ellipse)
     }
+    const b = p.bounds
+    bounds = { south: Math.min(bounds!.south, b.south), west: Math.min(bounds!.west, b.west), north: Math.max(bounds!.north, b.north), east: Math.max(bounds!.east, b.east) }
   })
-  const bounds = boundsOf(track)
-  return { track, waypoints: marks, rhumbAlternatives, corridors, vertices, greatEllipses, limitParallel: limitLine(track, bounds, options.limitLat), bounds }
+  return { track, waypoints: marks, rhumbAlternatives, corridors, vertices, greatEllipses, limitParallel: limitLine(bounds, options.limitLat), bounds, pieces }
 }
 
 function boundsOf(points: LatLon[]): ChartGeometry['bounds'] {
@@ -154,7 +193,7 @@ function boundsOf(points: LatLon[]): ChartGeometry['bounds'] {
 }
 
 /** The limit parallel on the side of the equator where the track reaches farthest from it. */
-function limitLine(track: LatLon[], bounds: ChartGeometry['bounds'], limitLat?: number | null): LatLon[] | null {
+function limitLine(bounds: ChartGeometry['bounds'], limitLat?: number | null): LatLon[] | null {
   if (!bounds || limitLat == null || !Number.isFinite(limitLat)) return null
   const lat = Math.abs(bounds.north) >= Math.abs(bounds.south) ? Math.abs(limitLat) : -Math.abs(limitLat)
   const margin = Math.max(10, (bounds.east - bounds.west) * 0.15)

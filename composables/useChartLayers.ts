@@ -28,22 +28,56 @@ export interface ChartMarkerState { editable: boolean, selected: number | null, 
 
 const ll = (points: LatLon[]) => points.map(p => [p.lat, p.lon] as [number, number])
 
+/**
+ * Waypoint markers drawn at most: beyond this, only the waypoints in view get one, every k-th of
+ * them (and always the ends and the selected one). Thousands overlap into one bead string at an
+ * ocean's scale and slow every frame; zooming in shows each one.
+ */
+const MAX_MARKERS = 400
+
+/** Legs per drawn path: a long plan is drawn in pieces so that an edit redraws only the pieces it touches. */
+const LEGS_PER_PATH = 200
+
+/** Each line of the chart as one path per run of LEGS_PER_PATH legs, in its own pane so the runs stack like one line. */
+function chunkedLine(map: Leaflet.Map, pane: string, zIndex: number, make: (pane: string) => Leaflet.Polyline<any>) {
+  map.createPane(pane).style.zIndex = String(zIndex)
+  const paths: Leaflet.Polyline<any>[] = []
+  const drawn: unknown[][] = []
+  /** Sets run c's lines from its parts, unless they are the very objects it shows already. */
+  function update(c: number, parts: unknown[], latlngs: () => Leaflet.LatLngExpression[] | Leaflet.LatLngExpression[][] | Leaflet.LatLngExpression[][][]) {
+    const before = drawn[c]
+    if (paths[c] && before && before.length === parts.length && before.every((p, k) => p === parts[k])) return
+    if (!paths[c]) paths[c] = make(pane).addTo(map)
+    paths[c]!.setLatLngs(latlngs())
+    drawn[c] = parts
+  }
+  function trim(runs: number) {
+    while (paths.length > Math.max(runs, 1)) { paths.pop()!.remove(); drawn.pop() }
+    if (!paths.length) paths.push(make(pane).addTo(map))
+    if (runs === 0) { paths[0]!.setLatLngs([]); drawn.length = 0 }
+  }
+  return { update, trim }
+}
+
 export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLayerHandlers) {
   const C = CHART_COLOURS
   // Leaflet simplifies paths to 1 px by default, which shows as kinks on a long geodesic's curve.
   const smoothFactor = 0.25
-  const corridor = L.polygon([], { color: C.corridor, weight: 1, opacity: 0.45, fillColor: C.corridor, fillOpacity: 0.2, interactive: false, className: 'pw-corridor', smoothFactor }).addTo(map)
-  const limit = L.polyline([], { color: C.limit, weight: 1.5, dashArray: '10 4 2 4', interactive: false, className: 'pw-limit-parallel' }).addTo(map)
-  const rhumb = L.polyline([], { color: C.rhumb, weight: 2, dashArray: '9 6', interactive: false, className: 'pw-rhumb-alternative' }).addTo(map)
-  const halo = L.polyline([], { color: C.halo, weight: 7, opacity: 0.75, interactive: false, smoothFactor }).addTo(map)
-  const track = L.polyline([], { color: C.track, weight: 3, interactive: false, className: 'pw-track', smoothFactor }).addTo(map)
+  const corridor = chunkedLine(map, 'pwCorridor', 401, pane => L.polygon([], { pane, color: C.corridor, weight: 1, opacity: 0.45, fillColor: C.corridor, fillOpacity: 0.2, interactive: false, className: 'pw-corridor', smoothFactor }))
+  map.createPane('pwLimit').style.zIndex = '402'
+  const limit = L.polyline([], { pane: 'pwLimit', color: C.limit, weight: 1.5, dashArray: '10 4 2 4', interactive: false, className: 'pw-limit-parallel' }).addTo(map)
+  const rhumb = chunkedLine(map, 'pwRhumb', 403, pane => L.polyline([], { pane, color: C.rhumb, weight: 2, dashArray: '9 6', interactive: false, className: 'pw-rhumb-alternative' }))
+  const halo = chunkedLine(map, 'pwHalo', 404, pane => L.polyline([], { pane, color: C.halo, weight: 7, opacity: 0.75, interactive: false, smoothFactor }))
+  const track = chunkedLine(map, 'pwTrack', 405, pane => L.polyline([], { pane, color: C.track, weight: 3, interactive: false, className: 'pw-track', smoothFactor }))
   // Above the track: the great ellipse runs within a few miles of a geodesic and would hide under it.
-  const ellipse = L.polyline([], { color: C.ellipse, weight: 3, dashArray: '0.5 8', lineCap: 'round', interactive: false, className: 'pw-great-ellipse', smoothFactor }).addTo(map)
+  map.createPane('pwEllipse').style.zIndex = '406'
+  const ellipse = L.polyline([], { pane: 'pwEllipse', color: C.ellipse, weight: 3, dashArray: '0.5 8', lineCap: 'round', interactive: false, className: 'pw-great-ellipse', smoothFactor }).addTo(map)
   const vertexLayer = L.layerGroup().addTo(map)
   const landLayer = L.layerGroup().addTo(map)
-  const markers: { marker: Leaflet.Marker, look: string, at: string }[] = []
+  const markers = new Map<number, { marker: Leaflet.Marker, selected: boolean | null, name: string, lat: number, lon: number }>()
   let vertexMarkers = new Map<string, Leaflet.Marker>()
   let dragging = -1
+  let shown: { points: LatLon[], state: ChartMarkerState } | null = null
 
   function makeMarker(i: number) {
     const marker = L.marker([0, 0], { keyboard: false, autoPan: true })
@@ -52,28 +86,46 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
     marker.on('drag', () => on.drag(i, at()))
     marker.on('dragend', () => { dragging = -1; on.dragEnd(i, at()) })
     marker.on('click', () => on.select(i))
-    return { marker: marker.addTo(map), look: '', at: '' }
+    return { marker: marker.addTo(map), selected: null as boolean | null, name: '', lat: Number.NaN, lon: Number.NaN }
+  }
+
+  /** Which waypoints get a marker: all of them, or in a long plan those in view, thinned to MAX_MARKERS. */
+  function markedIndices(points: LatLon[], state: ChartMarkerState): Iterable<number> {
+    if (points.length <= MAX_MARKERS) return points.keys()
+    const view = map.getBounds().pad(0.25)
+    const inView: number[] = []
+    points.forEach((p, i) => { if (view.contains([p.lat, p.lon])) inView.push(i) })
+    const step = Math.ceil(inView.length / MAX_MARKERS)
+    const out = new Set(step > 1 ? inView.filter((_, k) => k % step === 0) : inView)
+    for (const i of [0, points.length - 1, state.selected ?? -1, dragging]) if (i >= 0 && i < points.length) out.add(i)
+    return out
   }
 
   function updateMarkers(points: LatLon[], state: ChartMarkerState) {
-    while (markers.length > points.length) markers.pop()!.marker.remove()
-    while (markers.length < points.length) markers.push(makeMarker(markers.length))
-    points.forEach((p, i) => {
-      const m = markers[i]!
+    shown = { points, state }
+    const wanted = new Set(markedIndices(points, state))
+    for (const [i, m] of markers) if (!wanted.has(i)) { m.marker.remove(); markers.delete(i) }
+    for (const i of wanted) {
+      const p = points[i]!
+      let m = markers.get(i)
+      if (!m) markers.set(i, m = makeMarker(i))
       // Only markers that moved touch the DOM: a 500-waypoint plan redraws within a frame.
-      const at = `${p.lat},${p.lon}`
-      if (i !== dragging && m.at !== at) { m.marker.setLatLng([p.lat, p.lon]); m.at = at }
-      const look = `${state.selected === i}|${state.names[i] ?? ''}`
-      if (m.look !== look && i !== dragging) {
-        const cls = `pw-waypoint-marker${state.selected === i ? ' pw-waypoint-marker--selected' : ''}`
+      if (i !== dragging && (m.lat !== p.lat || m.lon !== p.lon)) { m.marker.setLatLng([p.lat, p.lon]); m.lat = p.lat; m.lon = p.lon }
+      const selected = state.selected === i
+      const name = state.names[i] ?? ''
+      if ((m.selected !== selected || m.name !== name) && i !== dragging) {
+        const cls = `pw-waypoint-marker${selected ? ' pw-waypoint-marker--selected' : ''}`
         m.marker.setIcon(L.divIcon({ className: cls, html: `<span>${i + 1}</span>`, iconSize: [22, 22], iconAnchor: [11, 11] }))
-        m.marker.getElement()?.setAttribute('title', `${i + 1}${state.names[i] ? ` ${state.names[i]}` : ''}`)
+        m.marker.getElement()?.setAttribute('title', `${i + 1}${name ? ` ${name}` : ''}`)
         m.marker.getElement()?.setAttribute('data-index', String(i))
-        m.look = look
+        m.selected = selected
+        m.name = name
       }
       if (m.marker.dragging && m.marker.dragging.enabled() !== state.editable) (state.editable ? m.marker.dragging.enable() : m.marker.dragging.disable())
-    })
+    }
   }
+  // Panning or zooming a long plan brings other waypoints into view.
+  map.on('moveend', () => { if (shown && shown.points.length > MAX_MARKERS) updateMarkers(shown.points, shown.state) })
 
   // Vertices are keyed by leg and position: unchanged legs keep their marker.
   function updateVertices(g: ChartGeometry) {
@@ -100,12 +152,25 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
     }
   }
 
+  /** The track (with its halo), rhumb alternatives and corridors, redrawn only in the runs of legs that changed. */
+  function updateLines(g: ChartGeometry) {
+    const runs = Math.ceil(g.pieces.length / LEGS_PER_PATH)
+    for (const line of [track, halo, rhumb, corridor]) line.trim(runs)
+    for (let c = 0; c < runs; c++) {
+      const parts = g.pieces.slice(c * LEGS_PER_PATH, (c + 1) * LEGS_PER_PATH)
+      const joined = () => ll([parts[0]!.track[0]!, ...parts.flatMap(p => p.track.slice(1))])
+      track.update(c, parts, joined)
+      halo.update(c, parts, joined)
+      const rhumbs = parts.map(p => p.rhumb).filter(r => r != null)
+      rhumb.update(c, rhumbs, () => rhumbs.map(ll))
+      const rings = parts.map(p => p.corridor).filter(r => r != null)
+      corridor.update(c, rings, () => rings.map(r => [ll(r)]))
+    }
+  }
+
   function update(g: ChartGeometry, state: ChartMarkerState) {
-    track.setLatLngs(ll(g.track))
-    halo.setLatLngs(ll(g.track))
-    rhumb.setLatLngs(g.rhumbAlternatives.map(ll))
+    updateLines(g)
     ellipse.setLatLngs(g.greatEllipses.map(ll))
-    corridor.setLatLngs(g.corridors.map(r => [ll(r)]))
     limit.setLatLngs(g.limitParallel ? ll(g.limitParallel) : [])
     updateVertices(g)
     updateMarkers(g.waypoints, state)

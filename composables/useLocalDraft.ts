@@ -1,7 +1,7 @@
 import type { PlanHeaderDraft } from '~/stores/planDraft'
 import type { Waypoint } from '#shared/types/waypoint'
 
-interface StoredDraft { savedAt: string, header: PlanHeaderDraft, waypoints: Waypoint[] }
+interface StoredDraft { savedAt: string, header: PlanHeaderDraft, waypoints: readonly Waypoint[] }
 
 /** Keeps unsaved changes in localStorage (per plan and version) so a reload does not lose them. */
 export function useLocalDraft() {
@@ -34,7 +34,9 @@ export function useLocalDraft() {
 
   onMounted(() => {
     restore()
-    watch(() => [store.header, store.waypoints, store.version], persist, { deep: true })
+    // The header is edited in place; the waypoint list is replaced whole on every change.
+    watch(() => store.header, persist, { deep: true })
+    watch(() => [store.waypoints, store.version], persist)
     // Versions already saved past leave their drafts behind: drop them.
     for (const k of Object.keys(localStorage))
       if (k.startsWith(`passagewright:draft:${store.planId}:`) && k !== key()) localStorage.removeItem(k)

@@ -8,7 +8,7 @@ export interface PlanConflict {
   changes: string[]
 }
 
-function describeChanges(mine: { header: Record<string, unknown>, waypoints: Waypoint[] }, theirs: PlanView, baseVersion: number): string[] {
+function describeChanges(mine: { header: Record<string, unknown>, waypoints: readonly Waypoint[] }, theirs: PlanView, baseVersion: number): string[] {
   const out = [`The server has version ${theirs.plan.version}; your draft started from version ${baseVersion}.`]
   if (theirs.plan.status !== 'draft') out.push(`The plan is now ${theirs.plan.status}.`)
   const a = mine.waypoints

@@ -1,8 +1,9 @@
+import { skipHydrate } from 'pinia'
 import type { LandCheckResult } from '#shared/types/landCheck'
 import type { PlanDetail } from '#shared/types/plan'
 import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
-import { computeLegTable } from '#shared/utils/legTable'
+import { computeLegTable, createLegMemo } from '#shared/utils/legTable'
 import { normaliseLongitude } from '#shared/utils/position'
 
 export interface PlanHeaderDraft {
@@ -15,18 +16,35 @@ export interface PlanHeaderDraft {
   arrivalPlaceId: number | null
 }
 
-/** What the planner is editing: the header and waypoints of one plan, with undo until saved. */
+/** What the draft loads from a plan view (the workspace page fetches no legs: it computes them). */
+type LoadedView = Pick<PlanView, 'plan' | 'waypoints'>
+
+/** Same leg data, field by field (what a save would send). */
+function sameWaypoint(a: Waypoint, b: Waypoint | undefined) {
+  return a === b || (!!b && a.name === b.name && a.lat === b.lat && a.lon === b.lon && a.method === b.method && (a.speedKn ?? null) === (b.speedKn ?? null)
+    && (a.xteNm ?? null) === (b.xteNm ?? null) && (a.turnRadiusNm ?? null) === (b.turnRadiusNm ?? null) && (a.notes ?? null) === (b.notes ?? null))
+}
+
+/**
+ * What the planner is editing: the header and waypoints of one plan, with undo until saved.
+ * The waypoint list and its waypoints are never changed in place: every edit replaces the one
+ * waypoint it changes and the list around it, so with 5,000 waypoints an edit costs what it changes
+ * (rows, legs and chart pieces compare waypoints by identity) and undo keeps lists, not copies.
+ * The page loads the draft from its fetched plan on both sides, so the lists are not sent twice
+ * in the page payload (skipHydrate).
+ */
 export const usePlanDraftStore = defineStore('planDraft', () => {
   const planId = ref<number | null>(null)
   const version = ref(0)
   const status = ref<PlanDetail['status']>('draft')
   const header = ref<PlanHeaderDraft>({ vesselId: null, title: '', departureUtc: new Date().toISOString(), speedKn: 14, limitLat: null, departurePlaceId: null, arrivalPlaceId: null })
-  const waypoints = ref<Waypoint[]>([])
-  const saved = ref<string>('')
-  const undoStack = ref<{ label: string, waypoints: Waypoint[] }[]>([])
+  const waypoints = skipHydrate(shallowRef<readonly Waypoint[]>([]))
+  const savedHeader = skipHydrate(shallowRef<PlanHeaderDraft | null>(null))
+  const savedWaypoints = skipHydrate(shallowRef<readonly Waypoint[]>([]))
+  const undoStack = skipHydrate(shallowRef<readonly { label: string, waypoints: readonly Waypoint[] }[]>([]))
   const selected = ref<number | null>(null)
   /** The plan as last loaded or saved (names, time zones, revision) for display. */
-  const plan = shallowRef<PlanDetail | null>(null)
+  const plan = skipHydrate(shallowRef<PlanDetail | null>(null))
   /** False for roles that only read (shore, admin): nothing becomes editable for them. */
   const roleMayEdit = ref(true)
   /** Cells whose typed text cannot be read, keyed by cell; nothing is saved while any remain. */
@@ -34,27 +52,27 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
   /** Where the chart is looking (UI state), so a first waypoint can start there. */
   const viewCentre = ref<{ lat: number, lon: number } | null>(null)
   /** The last land check of the current track, cleared by any change to the waypoints. */
-  const landCheck = shallowRef<LandCheckResult | null>(null)
+  const landCheck = skipHydrate(shallowRef<LandCheckResult | null>(null))
+  const legMemo = createLegMemo()
 
-  // Waypoints are replaced whole on every change, so reading each one raw (not through the
-  // reactive proxy) keeps the dependency on the list while the engine runs at full speed.
-  const rawWaypoints = computed(() => waypoints.value.map(w => toRaw(w)))
-  const snapshot = () => JSON.stringify({ header: header.value, waypoints: rawWaypoints.value })
-  const dirty = computed(() => snapshot() !== saved.value)
-  const savedParts = computed(() => (saved.value ? JSON.parse(saved.value) as { header: PlanHeaderDraft, waypoints: Waypoint[] } : null))
-  const headerDirty = computed(() => JSON.stringify(header.value) !== JSON.stringify(savedParts.value?.header))
-  const waypointsDirty = computed(() => JSON.stringify(rawWaypoints.value) !== JSON.stringify(savedParts.value?.waypoints))
+  const headerDirty = computed(() => JSON.stringify(header.value) !== JSON.stringify(savedHeader.value))
+  const waypointsDirty = computed(() => {
+    const now = waypoints.value
+    const then = savedWaypoints.value
+    return now.length !== then.length || now.some((w, i) => !sameWaypoint(w, then[i]))
+  })
+  const dirty = computed(() => headerDirty.value || waypointsDirty.value)
   const editable = computed(() => roleMayEdit.value && (status.value === 'draft' || status.value === 'returned'))
   const hasCellErrors = computed(() => Object.keys(cellErrors.value).length > 0)
 
   const legTable = computed(() => {
-    const valid = rawWaypoints.value.filter(w => Number.isFinite(w.lat) && Number.isFinite(w.lon))
+    const valid = waypoints.value.filter(w => Number.isFinite(w.lat) && Number.isFinite(w.lon))
     if (valid.length < 2 || !(header.value.speedKn > 0)) return null
-    try { return computeLegTable(valid, header.value.departureUtc, header.value.speedKn) }
+    try { return computeLegTable(valid, header.value.departureUtc, header.value.speedKn, { memo: legMemo }) }
     catch { return null }
   })
 
-  function load(view: PlanView) {
+  function load(view: LoadedView) {
     const p = view.plan
     plan.value = p
     landCheck.value = null
@@ -62,20 +80,29 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
     version.value = p.version
     status.value = p.status
     header.value = { vesselId: p.vesselId, title: p.title, departureUtc: p.departureUtc, speedKn: p.speedKn, limitLat: p.limitLat, departurePlaceId: p.departurePlaceId, arrivalPlaceId: p.arrivalPlaceId }
-    waypoints.value = view.waypoints.map(w => ({ ...w }))
-    saved.value = snapshot()
+    // The fetched waypoints are read only here: the draft replaces, never changes them.
+    waypoints.value = view.waypoints
+    savedHeader.value = { ...header.value }
+    savedWaypoints.value = view.waypoints
     undoStack.value = []
     selected.value = null
   }
 
   function checkpoint(label: string) {
-    undoStack.value.push({ label, waypoints: waypoints.value.map(w => ({ ...w })) })
-    if (undoStack.value.length > 100) undoStack.value.shift()
+    undoStack.value = [...undoStack.value.slice(-99), { label, waypoints: waypoints.value }]
+  }
+
+  function setList(list: readonly Waypoint[]) {
+    waypoints.value = list
+    landCheck.value = null
   }
 
   function updateWaypoint(i: number, patch: Partial<Waypoint>) {
     const current = waypoints.value[i]
-    if (current) waypoints.value[i] = { ...current, ...patch }
+    if (!current) return
+    const list = waypoints.value.slice()
+    list[i] = { ...current, ...patch }
+    setList(list)
   }
 
   function moveWaypoint(i: number, to: { lat: number, lon: number }) {
@@ -84,25 +111,27 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
 
   function insertWaypoint(at: number, w: Waypoint) {
     checkpoint('insert waypoint')
-    waypoints.value.splice(at, 0, w)
+    setList([...waypoints.value.slice(0, at), w, ...waypoints.value.slice(at)])
   }
 
   function removeWaypoint(i: number) {
     checkpoint('delete waypoint')
-    waypoints.value.splice(i, 1)
+    setList(waypoints.value.filter((_, k) => k !== i))
   }
 
   function reorder(from: number, to: number) {
     if (to < 0 || to >= waypoints.value.length) return
     checkpoint('reorder waypoints')
-    const [w] = waypoints.value.splice(from, 1)
-    waypoints.value.splice(to, 0, w!)
+    const list = waypoints.value.slice()
+    const [w] = list.splice(from, 1)
+    list.splice(to, 0, w!)
+    setList(list)
   }
 
   /** Track tools replace the list in one undoable step. */
-  function replaceWaypoints(list: Waypoint[], label: string) {
+  function replaceWaypoints(list: readonly Waypoint[], label: string) {
     checkpoint(label)
-    waypoints.value = list
+    setList(list)
   }
 
   function setCellError(key: string, message: string | null) {
@@ -114,23 +143,22 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
   }
 
   function undo() {
-    const last = undoStack.value.pop()
-    if (last) waypoints.value = last.waypoints
+    const last = undoStack.value.at(-1)
+    if (!last) return
+    undoStack.value = undoStack.value.slice(0, -1)
+    setList(last.waypoints)
   }
 
   /** Back to the last saved header and waypoints (as one undoable step for the waypoints). */
   function revert() {
-    const last = savedParts.value
-    if (!last) return
-    header.value = { ...last.header }
-    replaceWaypoints(last.waypoints, 'discard changes')
+    if (!savedHeader.value) return
+    header.value = { ...savedHeader.value }
+    replaceWaypoints(savedWaypoints.value, 'discard changes')
   }
 
-  function markSaved(view: PlanView) {
+  function markSaved(view: LoadedView) {
     load(view)
   }
-
-  watch(waypoints, () => { landCheck.value = null }, { deep: true })
 
   return {
     planId, version, status, header, waypoints, selected, undoStack, dirty, headerDirty, waypointsDirty, editable, legTable, plan, roleMayEdit,

@@ -44,12 +44,34 @@ export type PlanLeg = RhumbLeg | GeodesicLeg
 
 export interface LegTableTotals { distanceNm: number, hours: number, departureUtc: string, etaUtc: string, rhumbDistanceNm: number, savingNm: number }
 export interface LegTable { legs: PlanLeg[], totals: LegTableTotals }
-export interface LegTableOptions { helmDelayS?: number }
+export interface LegTableOptions {
+  helmDelayS?: number
+  /** Solved legs remembered by their waypoint objects (see createLegMemo); only for waypoints that are never changed in place. */
+  memo?: LegMemo
+}
 
-function legFor(i: number, a: LegTableWaypoint, b: LegTableWaypoint, speedKn: number, cumNm: number, etaMs: number): PlanLeg {
-  const rh = rhumbInverse(a, b)
+interface SolvedLeg { from: LegTableWaypoint, rh: ReturnType<typeof rhumbInverse>, g: ReturnType<typeof geodesicInverse> | null }
+export type LegMemo = WeakMap<LegTableWaypoint, SolvedLeg>
+
+/**
+ * A memo of solved legs keyed by the arriving waypoint object: when a draft replaces one waypoint
+ * of 5,000, the next table solves only the two legs that touch it (the rest is sums and times).
+ */
+export function createLegMemo(): LegMemo {
+  return new WeakMap()
+}
+
+function solveLeg(a: LegTableWaypoint, b: LegTableWaypoint, method: LegMethod, memo: LegMemo | undefined): SolvedLeg {
+  const known = memo?.get(b)
+  if (known && known.from === a) return known
+  const solved = { from: a, rh: rhumbInverse(a, b), g: method === 'geodesic' ? geodesicInverse(a, b) : null }
+  memo?.set(b, solved)
+  return solved
+}
+
+function legFor(i: number, a: LegTableWaypoint, b: LegTableWaypoint, speedKn: number, cumNm: number, etaMs: number, memo?: LegMemo): PlanLeg {
   const method = b.method ?? 'rhumb'
-  const g = method === 'geodesic' ? geodesicInverse(a, b) : null
+  const { rh, g } = solveLeg(a, b, method, memo)
   const distanceNm = g ? g.distanceNm : rh.distanceNm
   const hours = distanceNm / speedKn
   // One literal, then the method's course fields: object spread here made every leg a slow dictionary object.
@@ -76,7 +98,7 @@ export function computeLegTable(waypoints: readonly LegTableWaypoint[], departur
   let cumNm = 0
   let etaMs = depMs
   for (let i = 1; i < waypoints.length; i++) {
-    const leg = legFor(i - 1, waypoints[i - 1]!, waypoints[i]!, waypoints[i]!.speedKn || defaultSpeedKn, cumNm, etaMs)
+    const leg = legFor(i - 1, waypoints[i - 1]!, waypoints[i]!, waypoints[i]!.speedKn || defaultSpeedKn, cumNm, etaMs, options.memo)
     cumNm = leg.cumulativeNm
     etaMs += leg.hours * 3_600_000
     legs.push(leg)

@@ -60,6 +60,11 @@ describe('chart geometry', () => {
     const second = build(moved)
     expect(second.track.slice(0, 300)).toEqual(first.track.slice(0, 300))
     expect(second.track.at(-1)!.lat).toBe(48.2)
+    // The legs away from the moved waypoint are the very same pieces (the chart skips redrawing them).
+    expect(second.pieces[0]).toBe(first.pieces[0])
+    expect(second.pieces[1]).toBe(first.pieces[1])
+    expect(second.pieces[2]).not.toBe(first.pieces[2])
+    expect(second).toEqual({ ...createChartGeometry()(moved), pieces: second.pieces })
   })
 
   // Oracle: GeodSolve (GeographicLib 2.1.2, Debian geographiclib-tools), inverse problem.

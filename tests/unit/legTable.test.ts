@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { computeLegTable } from '../../shared/utils/legTable'
+import { computeLegTable, createLegMemo } from '../../shared/utils/legTable'
 import type { LegTableWaypoint } from '../../shared/utils/legTable'
 import { angleDiff, fmt, runOracle } from './support/oracle'
 
@@ -64,5 +64,19 @@ describe('leg table', () => {
   it('rejects a bad departure time or speed', () => {
     expect(() => computeLegTable(plan, 'not a date', 12)).toThrow(RangeError)
     expect(() => computeLegTable(plan, '2026-06-01T00:00:00Z', 0)).toThrow(RangeError)
+  })
+
+  it('with a memo of solved legs, an edited plan gets the same table as one computed afresh (oracle above)', () => {
+    const memo = createLegMemo()
+    const first = computeLegTable(plan, '2026-06-01T00:00:00Z', 14, { memo })
+    expect(first).toEqual(table)
+    // The draft replaces the waypoint it changes: the legs on either side of it are solved again.
+    const moved = plan.map((w, i) => (i === 2 ? { ...w, lat: 46.5, method: 'rhumb' as const } : w))
+    const again = computeLegTable(moved, '2026-06-01T00:00:00Z', 14, { memo })
+    expect(again).toEqual(computeLegTable(moved, '2026-06-01T00:00:00Z', 14))
+    expect(again.legs[1]!.method).toBe('rhumb')
+    expect(again.legs[1]!.distanceNm).not.toBeCloseTo(table.legs[1]!.distanceNm, 3)
+    expect(again.legs[0]!.distanceNm).toBe(table.legs[0]!.distanceNm)
+    expect(again.legs[0]!.courseChange).not.toBeCloseTo(table.legs[0]!.courseChange!, 3)
   })
 })
