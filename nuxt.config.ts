@@ -27,6 +27,10 @@ export default defineNuxtConfig({
     mailFrom: 'Passagewright <passages@kestrel-bight.example>',
     tileCacheDir: '',
     outboxWorker: 'on',
+    // Behind a TLS-terminating proxy: trust its X-Forwarded-Proto / X-Forwarded-Host (NUXT_TRUST_PROXY=on).
+    trustProxy: 'off',
+    // Further origins whose pages may write (NUXT_TRUSTED_ORIGINS, comma-separated), e.g. when a proxy rewrites Host.
+    trustedOrigins: '',
     // Sealed-cookie sessions: no server state, so any number of instances share them.
     session: { maxAge: 60 * 60 * 12, cookie: { httpOnly: true, sameSite: 'lax', secure: true } },
   },
@@ -56,7 +60,8 @@ export default defineNuxtConfig({
     rateLimiter: false,
     xssValidator: false,
     corsHandler: false,
-    requestSizeLimiter: { maxRequestSizeInBytes: 2_000_000, maxUploadFileRequestInBytes: 2_500_000, throwError: true },
+    // Body sizes are counted as they stream, per route (server/utils/requestRules.ts); this one only reads Content-Length.
+    requestSizeLimiter: false,
     removeLoggers: false,
   },
   hooks: {

@@ -17,7 +17,7 @@ const apiErrorHandler: NitroErrorHandler = (error, event) => {
   if (!event.path.startsWith('/api/')) return
   const anyError = error as any
   let statusCode: number = anyError.statusCode || 500
-  let message: string = anyError.statusMessage || 'Server error'
+  let message: string = anyError.statusMessage || (statusCode < 500 && anyError.message) || 'Server error'
   const issues: Issue[] | undefined = anyError.data?.issues ?? anyError.cause?.issues
   if (statusCode === 400 && Array.isArray(issues)) message = issueText(issues)
   else if (isDatabaseUnavailable(error)) { statusCode = 503; message = 'The database is not reachable at the moment; try again shortly' }

@@ -1,14 +1,28 @@
-// Every API route needs a live session except signing in, the health check and nuxt-auth-utils'
-// own session endpoint (it only ever reveals the caller's own session).
+import { randomUUID } from 'node:crypto'
+import type { H3Event } from 'h3'
+
+// Every API route needs a live session except signing in and the health check. nuxt-auth-utils'
+// own session routes check revocation in server/plugins/sessionRevocation.ts.
 const OPEN = new Set(['POST /api/auth/login', 'GET /api/health'])
+const SESSION_COOKIE = 'nuxt-session'
 
 export default defineEventHandler(async (event) => {
+  if (!getCookie(event, SESSION_COOKIE)) startUnsavedSession(event)
   if (!event.path.startsWith('/api/')) return
   const path = event.path.split('?')[0]!
   if (OPEN.has(`${event.method} ${path}`) || path === '/api/_auth/session') return
-  const session = await requireUserSession(event)
+  const session = await getUserSession(event)
+  if (!session.user) throw createError({ statusCode: 401, statusMessage: 'Sign in to continue' })
   if (await isSessionRevoked(session.id!)) {
     await clearUserSession(event)
     throw createError({ statusCode: 401, statusMessage: 'Your session has ended; sign in again' })
   }
 })
+
+// Without a cookie, h3 would create a session and set its cookie on whatever answer follows, so
+// a cross-site request (sent without the cookie) would replace the user's own. A session made
+// here is written only when something is stored in it (signing in).
+function startUnsavedSession(event: H3Event) {
+  event.context.sessions ??= Object.create(null)
+  event.context.sessions![SESSION_COOKIE] ??= { id: randomUUID(), createdAt: Date.now(), data: Object.create(null) }
+}

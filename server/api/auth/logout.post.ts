@@ -1,6 +1,5 @@
+// Clearing the session revokes its id (server/plugins/sessionRevocation.ts), so a copied cookie stops working everywhere.
 export default defineEventHandler(async (event) => {
-  const session = await getUserSession(event)
-  if (session.id && session.user) await revokeSession(session.id)
   await clearUserSession(event)
   return { ok: true }
 })
