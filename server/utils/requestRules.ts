@@ -23,10 +23,9 @@ export const BODY_RULES: [pattern: string, rule: BodyRule][] = [
   // 5,000 waypoints with names, notes and leg settings
   ['PUT /api/plans/:id/waypoints', { limitBytes: 6 * MB, kind: 'json' }],
   ['POST /api/land-check', { limitBytes: 6 * MB, kind: 'json' }],
-  // zone outlines as GeoJSON (ECAs have thousands of vertices)
-  ['POST /api/zones', { limitBytes: 8 * MB, kind: 'json' }],
-  ['PUT /api/zones/:id', { limitBytes: 8 * MB, kind: 'json' }],
-  ['POST /api/zones/import', { limitBytes: 8 * MB + MULTIPART_ALLOWANCE, kind: 'upload' }],
+  // zone outlines: GeoJSON text of up to 1.5 MB inside the JSON body
+  ['POST /api/zones', { limitBytes: 3 * MB, kind: 'json' }],
+  ['PUT /api/zones/:id', { limitBytes: 3 * MB, kind: 'json' }],
   // NMEA 0183 track logs of up to 50,000 sentences (about 4 MB)
   ['POST /api/plans/:id/reports/import', { limitBytes: 8 * MB + MULTIPART_ALLOWANCE, kind: 'upload' }],
   // route files and place CSVs: 2 MB
@@ -38,6 +37,9 @@ const compiled = BODY_RULES.map(([pattern, rule]) => {
   const source = path.split('/').map(s => (s === '**' ? '.+' : s.startsWith(':') ? '[^/]+' : s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&'))).join('/')
   return { method, re: new RegExp(`^${source}$`), rule }
 })
+
+const WRITES = new Set(['POST', 'PUT', 'PATCH', 'DELETE'])
+export const isWrite = (method: string) => WRITES.has(method)
 
 /** The body rule of a request: its route's entry in BODY_RULES, or JSON of at most 1 MB. */
 export function bodyRuleFor(method: string, path: string): BodyRule {

@@ -37,8 +37,6 @@ export const zoneUpdateSchema = z.object({
   .refine(validityOrder, validityIssue)
 export type ZoneUpdateInput = z.infer<typeof zoneUpdateSchema>
 
-export const zoneIdParamsSchema = z.object({ id: z.coerce.number({ error: 'id must be a number' }).int('id must be a whole number').positive('id must be positive').max(2_147_483_647, 'id is too large') })
-
 /** A zone as `GET /api/zones` lists it. */
 export interface ZoneSummary {
   id: number

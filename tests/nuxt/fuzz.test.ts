@@ -6,7 +6,7 @@ import type { Role } from '#shared/types/auth'
 import { createScratchDatabase, tableFingerprints } from '../support/database'
 import { client, loginAs, startServer, url, type Api } from '../support/server'
 import { listApiRoutes, routePath } from '../support/apiRoutes'
-import { BODYLESS, RULES } from '../support/accessRules'
+import { BODYLESS, RULES, pathIds } from '../support/accessRules'
 import { seededRandom } from '../unit/support/random'
 
 const databaseUrl = await createScratchDatabase('passagewright_fuzz')
@@ -66,7 +66,7 @@ describe('fuzzing every JSON route', () => {
         const m = malformed(rand, Math.floor(i / targets.length))
         const headers: Record<string, string> = role ? { cookie: users[role].cookie } : {}
         if (m.contentType) headers['content-type'] = m.contentType
-        const res = await fetch(url(routePath(route, rule.record ? ids[rule.record] : 0)), { method: route.method, headers, body: m.body })
+        const res = await fetch(url(routePath(route, pathIds(route.pattern, rule, ids, 0))), { method: route.method, headers, body: m.body })
         const text = await res.text()
         counts[res.status] = (counts[res.status] ?? 0) + 1
         let message = ''

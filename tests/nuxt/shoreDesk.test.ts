@@ -126,8 +126,8 @@ describe('place CSV import', () => {
     const body = await res.json()
     expect(res.status).toBe(200)
     expect(body.fileErrors[0]).toMatch(/line 1: header is missing lon/)
-    expect((await planner.request('/api/places/import?mode=preview', { method: 'POST', rawBody: good })).status).toBe(403)
-    expect((await shore.request('/api/places/import?mode=later', { method: 'POST', rawBody: good })).status).toBe(400)
+    expect((await planner.request('/api/places/import?mode=preview', { method: 'POST', rawBody: good, headers: { 'content-type': 'text/csv' } })).status).toBe(403)
+    expect((await shore.request('/api/places/import?mode=later', { method: 'POST', rawBody: good, headers: { 'content-type': 'text/csv' } })).status).toBe(400)
   })
 })
 

@@ -1,14 +1,37 @@
 // Who may call each API route: the roles table of the product brief (product.md, "People and
-// roles") written out for the tests, not read from the server code.
+// roles") written out for the tests, not read from the server code. A new route gets one row in
+// RULES (and, when its path names a new kind of record, a maker in RECORD_MAKERS); the access
+// and fuzz suites then cover it as every role of two companies.
 import type { Role } from '#shared/types/auth'
+import type { Api } from './server'
+import { expectStatus, makePlan } from './records'
 
 export const ALL: Role[] = ['planner', 'master', 'shore', 'admin']
 export const EDIT: Role[] = ['planner', 'master']
 export const DESK: Role[] = ['shore', 'admin']
 export const ADMIN: Role[] = ['admin']
 
-/** Who may call each route; 'open' needs no session. `record` names the kind of record in `:id`. */
-export const RULES: Record<string, { roles: Role[] | 'open', record?: 'plan' | 'place' | 'vessel' | 'table' | 'zone' }> = {
+export type RecordKind = 'plan' | 'place' | 'vessel' | 'table' | 'zone'
+
+export interface AccessRule {
+  /** Who may call it; 'open' needs no session. */
+  roles: Role[] | 'open'
+  /** The kind of record the path's parameters name: one kind for all, or per parameter (`{ id: 'plan', reportId: 'report' }`). */
+  record?: RecordKind | Record<string, RecordKind>
+  /** A well-formed body (JSON, or a multipart form for uploads), so validation passes and the scope check answers. */
+  body?: unknown | (() => FormData)
+  /** A query string the route needs to get past validation. */
+  query?: string
+}
+
+const csvUpload = (csv: string, fields: Record<string, string> = {}) => () => {
+  const form = new FormData()
+  form.append('file', new Blob([csv], { type: 'text/csv' }), 'probe.csv')
+  for (const [k, v] of Object.entries(fields)) form.append(k, v)
+  return form
+}
+
+export const RULES: Record<string, AccessRule> = {
   'GET /api/health': { roles: 'open' },
   'POST /api/auth/login': { roles: 'open' },
   'POST /api/auth/logout': { roles: ALL },
@@ -24,26 +47,26 @@ export const RULES: Record<string, { roles: Role[] | 'open', record?: 'plan' | '
   'POST /api/land-check': { roles: ALL },
   'GET /api/routing/passages': { roles: ALL },
   'POST /api/routing/sea': { roles: ALL },
-  'GET /api/timezone': { roles: ALL },
+  'GET /api/timezone': { roles: ALL, query: '?lat=1&lon=1' },
   'GET /api/outbox': { roles: ALL },
   'GET /api/places': { roles: ALL },
   'POST /api/places': { roles: DESK },
-  'POST /api/places/import': { roles: DESK },
-  'PUT /api/places/:id': { roles: DESK, record: 'place' },
+  'POST /api/places/import': { roles: DESK, query: '?mode=preview', body: csvUpload('name,kind,latitude,longitude\nProbe,port,1,1\n') },
+  'PUT /api/places/:id': { roles: DESK, record: 'place', body: { name: 'Scope probe', kind: 'port', lat: 1, lon: 1 } },
   'DELETE /api/places/:id': { roles: DESK, record: 'place' },
   'GET /api/plans': { roles: ALL },
   'POST /api/plans': { roles: EDIT },
-  'POST /api/plans/import': { roles: EDIT },
+  'POST /api/plans/import': { roles: EDIT, body: csvUpload('name,latitude,longitude\nA,1,1\nB,2,2\n', { mode: 'preview' }) },
   'GET /api/plans/:id': { roles: ALL, record: 'plan' },
-  'PUT /api/plans/:id': { roles: EDIT, record: 'plan' },
-  'PUT /api/plans/:id/waypoints': { roles: EDIT, record: 'plan' },
+  'PUT /api/plans/:id': { roles: EDIT, record: 'plan', body: { version: 1, title: 'Scope probe', departureUtc: '2027-01-01T00:00:00Z', speedKn: 12 } },
+  'PUT /api/plans/:id/waypoints': { roles: EDIT, record: 'plan', body: { version: 1, waypoints: [{ lat: 10, lon: 10 }, { lat: 11, lon: 11 }] } },
   'POST /api/plans/:id/submit': { roles: EDIT, record: 'plan' },
   'POST /api/plans/:id/approve': { roles: ['master'], record: 'plan' },
-  'POST /api/plans/:id/return': { roles: ['master'], record: 'plan' },
+  'POST /api/plans/:id/return': { roles: ['master'], record: 'plan', body: { remarks: 'Scope probe' } },
   'POST /api/plans/:id/revise': { roles: EDIT, record: 'plan' },
-  'POST /api/plans/:id/remarks': { roles: ALL, record: 'plan' },
+  'POST /api/plans/:id/remarks': { roles: ALL, record: 'plan', body: { remarks: 'Scope probe' } },
   'POST /api/plans/:id/brief': { roles: ['planner', 'master', 'shore'], record: 'plan' },
-  'GET /api/plans/:id/export': { roles: ALL, record: 'plan' },
+  'GET /api/plans/:id/export': { roles: ALL, record: 'plan', query: '?format=csv' },
   'GET /api/tables': { roles: ALL },
   'POST /api/tables': { roles: DESK },
   'GET /api/tables/:id': { roles: ALL, record: 'table' },
@@ -52,27 +75,36 @@ export const RULES: Record<string, { roles: Role[] | 'open', record?: 'plan' | '
   'GET /api/tables/:id/export': { roles: ALL, record: 'table' },
   'GET /api/zones': { roles: ALL },
   'POST /api/zones': { roles: DESK },
-  'PUT /api/zones/:id': { roles: DESK, record: 'zone' },
+  'PUT /api/zones/:id': { roles: DESK, record: 'zone', body: { validTo: '2030-01-01' } },
   'DELETE /api/zones/:id': { roles: DESK, record: 'zone' },
   'GET /api/vessels': { roles: ALL },
   'GET /api/vessels/:id': { roles: ALL, record: 'vessel' },
-  'PUT /api/vessels/:id': { roles: ADMIN, record: 'vessel' },
-  'PUT /api/vessels/:id/crew': { roles: ADMIN, record: 'vessel' },
-  'PUT /api/vessels/:id/fuel': { roles: DESK, record: 'vessel' },
+  'PUT /api/vessels/:id': { roles: ADMIN, record: 'vessel', body: { name: 'Scope probe', imoNumber: '9074729', callSign: 'ABC1', serviceSpeedKn: 12, masterUserId: null } },
+  'PUT /api/vessels/:id/crew': { roles: ADMIN, record: 'vessel', body: { crew: [{ name: 'Scope probe', rank: 'Cadet', email: 'probe@example.com' }] } },
+  'PUT /api/vessels/:id/fuel': { roles: DESK, record: 'vessel', body: { points: [{ speedKn: 10, tonnesPerDay: 20 }, { speedKn: 12, tonnesPerDay: 30 }] } },
+}
+
+/** The ids to put in a route's path: each parameter's record of its kind from `ids`, or `fallback`. */
+export function pathIds(pattern: string, rule: AccessRule, ids: Partial<Record<RecordKind, number>>, fallback: number): Record<string, number> {
+  const params = [...pattern.matchAll(/:(\w+)/g)].map(m => m[1]!)
+  return Object.fromEntries(params.map((p) => {
+    const kind = typeof rule.record === 'string' ? rule.record : rule.record?.[p]
+    return [p, (kind && ids[kind]) ?? fallback]
+  }))
 }
 
 /** Routes that act on the record without reading a body; the fuzz test leaves them alone. */
 export const BODYLESS = new Set(['POST /api/auth/logout', 'POST /api/plans/:id/submit', 'POST /api/plans/:id/approve', 'POST /api/plans/:id/revise', 'POST /api/plans/:id/brief', 'POST /api/tables/:id/rebuild'])
 
-/** A well-formed body for routes on a record, so the scope check (404) is reached past validation. */
-export const VALID_BODIES: Record<string, unknown> = {
-  'PUT /api/plans/:id': { version: 1, title: 'Scope probe', departureUtc: '2027-01-01T00:00:00Z', speedKn: 12 },
-  'PUT /api/plans/:id/waypoints': { version: 1, waypoints: [{ lat: 10, lon: 10 }, { lat: 11, lon: 11 }] },
-  'POST /api/plans/:id/remarks': { remarks: 'Scope probe' },
-  'POST /api/plans/:id/return': { remarks: 'Scope probe' },
-  'PUT /api/places/:id': { name: 'Scope probe', kind: 'port', lat: 1, lon: 1 },
-  'PUT /api/zones/:id': { validTo: '2030-01-01' },
-  'PUT /api/vessels/:id': { name: 'Scope probe', imoNumber: '9074729', callSign: 'ABC1', serviceSpeedKn: 12, masterUserId: null },
-  'PUT /api/vessels/:id/crew': { crew: [{ name: 'Scope probe', rank: 'Cadet', email: 'probe@example.com' }] },
-  'PUT /api/vessels/:id/fuel': { points: [{ speedKn: 10, tonnesPerDay: 20 }, { speedKn: 12, tonnesPerDay: 30 }] },
+/** How a test makes its own record of each kind, in the company of the callers given. */
+export const RECORD_MAKERS: Record<RecordKind, (as: Record<Role, Api>) => Promise<number>> = {
+  plan: as => makePlan('draft', { planner: as.planner }),
+  place: async as => (await expectStatus<{ id: number }>(as.shore.request('/api/places', { method: 'POST', body: { name: `Access probe ${Date.now()}`, kind: 'port', lat: 10.5, lon: 20.5 } }), 201)).id,
+  // No route creates vessels; reading one changes nothing.
+  vessel: async as => (await expectStatus<{ id: number }[]>(as.planner.request('/api/vessels'), 200))[0]!.id,
+  table: async (as) => {
+    const places = await expectStatus<{ id: number }[]>(as.shore.request('/api/places'), 200)
+    return (await expectStatus<{ id: number }>(as.shore.request('/api/tables', { method: 'POST', body: { name: `Access probe ${Date.now()}`, placeIds: places.slice(0, 2).map(p => p.id) } }), 201)).id
+  },
+  zone: async as => (await expectStatus<{ id: number }>(as.shore.request('/api/zones', { method: 'POST', body: { name: `Access probe ${Date.now()}`, kind: 'custom', geojson: { type: 'Polygon', coordinates: [[[-30, 40], [-29, 40], [-29, 41], [-30, 41], [-30, 40]]] } } }), 201)).id,
 }

@@ -24,7 +24,7 @@ export function listApiRoutes(): ApiRoute[] {
   }).sort((a, b) => a.key.localeCompare(b.key))
 }
 
-/** Fills `:id` with the given id. */
-export function routePath(route: ApiRoute, id: number | string) {
-  return route.pattern.replace(/:\w+/g, String(id))
+/** Fills each `:param` with its id: one id for all, or one per parameter name. */
+export function routePath(route: ApiRoute, ids: number | string | Record<string, number>) {
+  return route.pattern.replace(/:(\w+)/g, (_m, name: string) => String(typeof ids === 'object' ? ids[name] : ids))
 }

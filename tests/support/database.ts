@@ -36,3 +36,17 @@ export async function tableFingerprints(databaseUrl: string): Promise<Record<str
   }
   finally { await db.destroy() }
 }
+
+/**
+ * A user of the named company with the demo password (its hash copied from a demo user of that
+ * company), for tests that need a role the demo data does not give that company.
+ */
+export async function addCompanyUser(companyName: string, role: string, email: string): Promise<void> {
+  const db = knex({ client: 'pg', connection: process.env.NUXT_DATABASE_URL! })
+  try {
+    const company = await db('companies').where({ name: companyName }).first('id')
+    const hash = await db('users').where({ company_id: company.id }).first('password_hash')
+    await db('users').insert({ company_id: company.id, email, name: `Test ${role}`, role, password_hash: hash.password_hash }).onConflict('email').ignore()
+  }
+  finally { await db.destroy() }
+}

@@ -63,12 +63,17 @@ export function client(cookie = ''): Api {
 }
 
 export async function loginAs(who: DemoUser): Promise<Api> {
+  return loginWithEmail(demoUsers[who])
+}
+
+/** Signs in any user with the demo password. */
+export async function loginWithEmail(email: string): Promise<Api> {
   const res = await fetch(url('/api/auth/login'), {
     method: 'POST',
     headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email: demoUsers[who], password: DEMO_PASSWORD }),
+    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
   })
-  if (res.status !== 200) throw new Error(`sign-in as ${who} failed: ${res.status}`)
+  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status}`)
   const cookie = res.headers.getSetCookie().map(c => c.split(';')[0]).join('; ')
   return client(cookie)
 }

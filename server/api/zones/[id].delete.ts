@@ -1,7 +1,7 @@
-import { zoneIdParamsSchema } from '#shared/types/zone'
+import { idParamsSchema } from '#shared/types/fields'
 
 export default defineRoleHandler(ZONE_KEEPERS, async (event, user) => {
-  const { id } = await getValidatedRouterParams(event, zoneIdParamsSchema.parse)
+  const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
   await deleteZone(user, id)
   setResponseStatus(event, 204)
   return null
