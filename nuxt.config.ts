@@ -27,6 +27,7 @@ export default defineNuxtConfig({
     mailFrom: 'Passagewright <passages@kestrel-bight.example>',
     tileCacheDir: '',
     outboxWorker: 'on',
+    tableWorker: 'on',
     // Behind a TLS-terminating proxy: trust its X-Forwarded-Proto / X-Forwarded-Host (NUXT_TRUST_PROXY=on).
     trustProxy: 'off',
     // Further origins whose pages may write (NUXT_TRUSTED_ORIGINS, comma-separated), e.g. when a proxy rewrites Host.

@@ -59,7 +59,7 @@ export async function listEvents(planId: number): Promise<PlanEvent[]> {
   return rows.map(r => ({ id: r.id, userName: r.user_name, role: r.role, kind: r.kind, fromStatus: r.from_status, toStatus: r.to_status, remarks: r.remarks, createdAt: iso(r.created_at)! }))
 }
 
-export function legTableFor(plan: Pick<PlanDetail, 'departureUtc' | 'speedKn'>, waypoints: Waypoint[], helmDelayS = 0) {
+function legTableFor(plan: Pick<PlanDetail, 'departureUtc' | 'speedKn'>, waypoints: Waypoint[], helmDelayS = 0) {
   return computeLegTable(waypoints, plan.departureUtc, plan.speedKn, { helmDelayS })
 }
 

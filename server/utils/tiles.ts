@@ -252,7 +252,3 @@ export async function getTile(t: TileAddress, cacheDir?: string): Promise<Tile> 
   return tile
 }
 
-/** Memory cache size, for benchmarks and tests. */
-export function tileMemoryStats(): { tiles: number, bytes: number } {
-  return { tiles: memory.size, bytes: memoryBytes }
-}
