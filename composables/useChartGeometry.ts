@@ -4,11 +4,10 @@
 import type { LatLon, LegMethod } from '#shared/types/geo'
 import type { LandCheckLeg } from '#shared/types/landCheck'
 import { densifyLeg, unwrapLongitudes } from '#shared/utils/track'
-import { wrapLongitude } from '#shared/utils/position'
 import { geodesicDirect, geodesicInverse, geodesicVertex } from '#shared/utils/geodesic'
 import { greatEllipseDensify } from '#shared/utils/greatEllipse'
 import { rhumbInverse } from '#shared/utils/rhumb'
-import { normaliseCourse } from '#shared/utils/position'
+import { normaliseCourse, wrapLongitude } from '#shared/utils/position'
 import { NM_M } from '#shared/utils/navConstants'
 
 export interface ChartWaypoint extends LatLon { method?: LegMethod, xteNm?: number | null }

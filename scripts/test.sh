@@ -31,5 +31,7 @@ log "building the app for the tests"
 npx nuxt build >"$DATA/build-test.log" 2>&1 || { tail -60 "$DATA/build-test.log"; die "build failed"; }
 log "type check (vue-tsc --build --noEmit)"
 npx vue-tsc --build --noEmit
+log "lint (eslint, eslint.config.mjs)"
+npx eslint .
 log "tests: unit, nuxt, e2e"
 npx vitest run "$@"
