@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { latLonSchema } from './geo'
+import { idSchema, speedKnSchema } from './fields'
 import type { LatLon } from './geo'
 import { PASSAGE_IDS } from '../utils/routing/passages'
 import type { PassageKind } from '../utils/routing/passages'
@@ -20,6 +21,11 @@ export const seaRouteSchema = z.object({
   avoid: z.array(passageIdSchema, { error: 'must be a list of passage ids' }).max(PASSAGE_IDS.length, 'too many passages').optional(),
   clearanceNm: z.number({ error: 'must be a number' }).finite().min(0, 'must be 0 or more').max(MAX_ROUTE_CLEARANCE_NM, `at most ${MAX_ROUTE_CLEARANCE_NM} nm`).optional(),
   limitLat: z.number({ error: 'must be a number' }).finite().min(20, 'must be between 20 and 84').max(84, 'must be between 20 and 84').optional(),
+  /** Zones to keep out of besides no-go areas (always avoided): risk areas, and ECAs weighted by their fuel cost (minimum-ECA routing). */
+  avoidZones: z.array(z.enum(['risk', 'eca'], { error: 'must be "risk" or "eca"' }), { error: 'must be a list of "risk" and "eca"' }).max(2, 'at most "risk" and "eca"').optional(),
+  /** For the fuel cost of a minimum-ECA comparison: the vessel's fuel curve, grades and a speed (its service speed when omitted). */
+  vesselId: idSchema.optional(),
+  speedKn: speedKnSchema.optional(),
 })
 export type SeaRouteInput = z.infer<typeof seaRouteSchema>
 

@@ -1,9 +1,9 @@
 import { seaRouteSchema } from '#shared/types/routing'
 import type { SeaRouteResult } from '#shared/types/routing'
-import { planSeaRoute } from '~~/server/utils/routing/service'
 
-// The shortest practical sea route between two positions (server/utils/routing).
-export default defineRoleHandler(ALL_ROLES, async (event) => {
+// The shortest practical sea route between two positions (server/utils/routing), kept out of the
+// company's no-go areas (and risk areas or ECAs on request), with the distance inside each zone.
+export default defineRoleHandler(ALL_ROLES, async (event, user) => {
   const input = await readValidatedBody(event, seaRouteSchema.parse)
-  return (await planSeaRoute(input)) satisfies SeaRouteResult
+  return (await planZonedSeaRoute(user, input)) satisfies SeaRouteResult
 })
