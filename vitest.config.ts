@@ -1,5 +1,6 @@
 import { defineConfig } from 'vitest/config'
 import { fileURLToPath } from 'node:url'
+import { defineVitestProject } from '@nuxt/test-utils/config'
 
 const root = fileURLToPath(new URL('.', import.meta.url))
 const alias = { '#shared': `${root}shared`, '~~': root.replace(/\/$/, '') }
@@ -7,6 +8,10 @@ const alias = { '#shared': `${root}shared`, '~~': root.replace(/\/$/, '') }
 export default defineConfig({
   test: {
     projects: [
+      // Components mounted with mountSuspended inside a Nuxt app (auto-imports, Pinia), in happy-dom.
+      await defineVitestProject({
+        test: { name: 'components', include: ['tests/components/**/*.test.ts'], environment: 'nuxt', testTimeout: 60_000 },
+      }),
       {
         resolve: { alias },
         test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node', testTimeout: 60_000 },
