@@ -4,6 +4,9 @@ import type { PlanCreateInput, PlanDetail, PlanEvent, PlanHeaderInput, PlanSumma
 import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
 import { computeLegTable } from '#shared/utils/legTable'
+import type { FuelInput, StoredLegs } from './planLegs'
+
+type LegPlan = Parameters<typeof storeLegs>[1]
 
 const summaryColumns = [
   'plans.id', 'plans.title', 'plans.vessel_id as vesselId', 'vessels.name as vesselName', 'plans.status', 'plans.revision',
@@ -63,17 +66,36 @@ function legTableFor(plan: Pick<PlanDetail, 'departureUtc' | 'speedKn'>, waypoin
   return computeLegTable(waypoints, plan.departureUtc, plan.speedKn, { helmDelayS })
 }
 
-export async function getPlanView(user: SessionUser, id: number): Promise<PlanView> {
+// One query for what a plan view reads besides the plan row: its waypoints and history as JSON
+// built by PostgreSQL (no rows to parse and serialise again), its stored legs, and its end positions.
+const VIEW_SQL = `select
+  (select coalesce(json_agg(json_build_object('name', name, 'lat', lat, 'lon', lon, 'method', method, 'speedKn', speed_kn::float8,
+    'xteNm', xte_nm::float8, 'turnRadiusNm', turn_radius_nm::float8, 'notes', notes) order by seq), '[]')::text from waypoints where plan_id = :id) as waypoints,
+  (select coalesce(json_agg(json_build_object('id', id, 'userName', user_name, 'role', role, 'kind', kind, 'fromStatus', from_status, 'toStatus', to_status,
+    'remarks', remarks, 'createdAt', to_char(created_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')) order by created_at, id), '[]')::text
+    from plan_events where plan_id = :id) as events,
+  (select json_build_array(lat, lon) from waypoints where plan_id = :id order by seq limit 1) as first,
+  (select json_build_array(lat, lon) from waypoints where plan_id = :id order by seq desc limit 1) as last,
+  (select count(*)::int from waypoints where plan_id = :id) as count,
+  l.plan_version, l.engine, l.zone_signature, l.legs_json, l.totals_json, l.fuel_input_json
+  from (select 1) one left join plan_legs l on l.plan_id = :id`
+
+/** GET /api/plans/:id as the JSON text it sends: legs read back as stored (see planLegs.ts), recomputed only when stale. */
+export async function getPlanViewJson(user: SessionUser, id: number): Promise<string> {
   const plan = await findPlan(user, id)
-  const waypoints = await loadWaypoints(id)
+  const { rows: [r] } = await useDb().raw(VIEW_SQL, { id })
   // Without a departure or arrival place, the time zone comes from the first or last waypoint's position.
-  plan.departureTimeZone ??= waypoints.length ? timeZoneAt(waypoints[0]!.lat, waypoints[0]!.lon) : null
-  plan.arrivalTimeZone ??= waypoints.length > 1 ? timeZoneAt(waypoints.at(-1)!.lat, waypoints.at(-1)!.lon) : null
-  const table = legTableFor(plan, waypoints)
-  const zones = await zonesForLegs(user.companyId, table.legs)
-  const legs = table.legs.map((l, i) => ({ ...l, zones: zones.legs[i]! }))
-  const fuel = await fuelForPlan(user.companyId, plan.vesselId, table.legs, zones.legs)
-  return { plan, waypoints, legs, totals: { ...table.totals, zones: zones.totals }, fuel, events: await listEvents(id) }
+  plan.departureTimeZone ??= r.first ? timeZoneAt(r.first[0], r.first[1]) : null
+  plan.arrivalTimeZone ??= r.count > 1 ? timeZoneAt(r.last[0], r.last[1]) : null
+  const legs: StoredLegs = (await storedLegsCurrent(plan, r))
+    ? { legsJson: r.legs_json, totalsJson: r.totals_json, fuelInput: JSON.parse(r.fuel_input_json) as FuelInput }
+    : await storeLegs(useDb(), plan, await loadWaypoints(id))
+  const fuel = await fuelForPlan(user.companyId, plan.vesselId, legs.fuelInput.legs, legs.fuelInput.zones)
+  return `{"plan":${JSON.stringify(plan)},"waypoints":${r.waypoints},"legs":${legs.legsJson},"totals":${legs.totalsJson},"fuel":${JSON.stringify(fuel)},"events":${r.events}}`
+}
+
+export async function getPlanView(user: SessionUser, id: number): Promise<PlanView> {
+  return JSON.parse(await getPlanViewJson(user, id)) as PlanView
 }
 
 export async function recordEvent(db: Knex | Knex.Transaction, planId: number, user: SessionUser, kind: string, from: string | null, to: string | null, remarks: string | null = null) {
@@ -107,23 +129,24 @@ export async function createPlan(user: SessionUser, input: PlanCreateInput, wayp
       company_id: user.companyId, vessel_id: input.vesselId, title: input.title, departure_utc: input.departureUtc, speed_kn: input.speedKn,
       limit_lat: input.limitLat ?? null, departure_place_id: input.departurePlaceId ?? null, arrival_place_id: input.arrivalPlaceId ?? null, created_by: user.id,
     }).returning('id')
-    if (waypoints.length) await writeWaypoints(trx, row.id, { departureUtc: input.departureUtc, speedKn: input.speedKn }, waypoints)
+    if (waypoints.length) await writeWaypoints(trx, { id: row.id, companyId: user.companyId, version: 1, status: 'draft', departureUtc: input.departureUtc, speedKn: input.speedKn }, waypoints)
     await recordEvent(trx, row.id, user, 'created', null, 'draft')
     return { id: row.id as number }
   })
 }
 
-async function writeWaypoints(trx: Knex.Transaction, planId: number, plan: { departureUtc: string, speedKn: number }, waypoints: Waypoint[]) {
-  await trx('waypoints').where({ plan_id: planId }).delete()
-  const rows = waypointRows(planId, waypoints)
+async function writeWaypoints(trx: Knex.Transaction, plan: LegPlan, waypoints: Waypoint[]) {
+  await trx('waypoints').where({ plan_id: plan.id }).delete()
+  const rows = waypointRows(plan.id, waypoints)
   for (let i = 0; i < rows.length; i += 1000) await trx('waypoints').insert(rows.slice(i, i + 1000))
-  await storeTotals(trx, planId, plan, waypoints)
+  await storeLegTable(trx, plan, waypoints)
 }
 
-/** Totals kept on the plan row so the board lists them without recomputing every plan. */
-async function storeTotals(trx: Knex.Transaction, planId: number, plan: { departureUtc: string, speedKn: number }, waypoints: Waypoint[]) {
-  const { totals } = legTableFor(plan, waypoints)
-  await trx('plans').where({ id: planId }).update({ total_nm: waypoints.length > 1 ? totals.distanceNm : null, arrival_utc: waypoints.length > 1 ? totals.etaUtc : null })
+/** The legs of the version being saved, stored with it; their totals also on the plan row, so the board lists them without reading legs. */
+async function storeLegTable(trx: Knex.Transaction, plan: LegPlan, waypoints: Waypoint[]) {
+  const { totalsJson } = await storeLegs(trx, plan, waypoints)
+  const totals = JSON.parse(totalsJson) as { distanceNm: number, etaUtc: string }
+  await trx('plans').where({ id: plan.id }).update({ total_nm: waypoints.length > 1 ? totals.distanceNm : null, arrival_utc: waypoints.length > 1 ? totals.etaUtc : null })
 }
 
 function assertEditable(plan: PlanDetail) {
@@ -144,7 +167,7 @@ export async function saveWaypoints(user: SessionUser, id: number, version: numb
     await bumpVersion(trx, plan, version, plan.status === 'returned' ? { status: 'draft' } : {})
     // Editing a returned plan takes it back to draft: a sign-off step, so it goes in the history.
     if (plan.status === 'returned') await recordEvent(trx, id, user, 'reopened', 'returned', 'draft')
-    await writeWaypoints(trx, id, plan, waypoints)
+    await writeWaypoints(trx, { ...plan, version: version + 1, status: 'draft' }, waypoints)
   })
   return getPlanView(user, id)
 }
@@ -157,7 +180,7 @@ export async function updatePlanHeader(user: SessionUser, id: number, input: Pla
       title: input.title, departure_utc: input.departureUtc, speed_kn: input.speedKn, limit_lat: input.limitLat ?? null,
       departure_place_id: input.departurePlaceId ?? null, arrival_place_id: input.arrivalPlaceId ?? null,
     })
-    await storeTotals(trx, id, { departureUtc: input.departureUtc, speedKn: input.speedKn }, await loadWaypoints(id, trx))
+    await storeLegTable(trx, { ...plan, version: input.version + 1, departureUtc: input.departureUtc, speedKn: input.speedKn }, await loadWaypoints(id, trx))
   })
   return getPlanView(user, id)
 }
