@@ -40,8 +40,8 @@ export async function storeLegs(db: Db, plan: LegPlan, waypoints: readonly Waypo
  * Whether a stored row still holds the plan's legs. Waypoints and header change only in a draft (or a
  * returned plan), each change storing its legs: a submitted or approved plan's row is its current one.
  */
-export async function storedLegsCurrent(plan: LegPlan, row: StoredLegsRow | null | undefined): Promise<boolean> {
-  if (!row) return false
+export async function storedLegsCurrent(plan: LegPlan, row: Partial<StoredLegsRow> | null | undefined): Promise<boolean> {
+  if (row?.legs_json == null) return false
   if (plan.status === 'approved') return true
   if (row.engine !== LEG_ENGINE) return false
   if (plan.status !== 'submitted' && row.plan_version !== plan.version) return false

@@ -70,6 +70,17 @@ describe('stored legs', () => {
     expect((await db('plan_legs').where({ plan_id: id }).first()).engine).toBe('an older engine')
   })
 
+  it('of an approved plan stored before legs were kept are computed once on first read, then kept', async () => {
+    const id = await newPlan('Stored legs, approved earlier')
+    expect((await planner.request(`/api/plans/${id}/submit`, { method: 'POST' })).status).toBe(200)
+    expect((await master.request(`/api/plans/${id}/approve`, { method: 'POST' })).status).toBe(200)
+    await db('plan_legs').where({ plan_id: id }).delete()
+    const view = (await planner.request(`/api/plans/${id}`)).body
+    expect(Math.abs(view.legs[0].distanceNm - geodSolveNm())).toBeLessThan(1e-6)
+    await storeAsOlderEngine(id)
+    expect((await planner.request(`/api/plans/${id}`)).body.legs[0].distanceNm).toBe(OLDER_ENGINE_NM)
+  })
+
   it('of a draft are recomputed by the current engine and stored again', async () => {
     const id = await newPlan('Stored legs, draft')
     await storeAsOlderEngine(id)
