@@ -3,7 +3,6 @@ import type { SessionUser } from '#shared/types/auth'
 import type { PlanCreateInput, PlanDetail, PlanEvent, PlanHeaderInput, PlanSummary } from '#shared/types/plan'
 import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
-import { computeLegTable } from '#shared/utils/legTable'
 import type { FuelInput, StoredLegs } from './planLegs'
 
 type LegPlan = Parameters<typeof storeLegs>[1]
@@ -60,10 +59,6 @@ export async function loadWaypoints(planId: number, db: Knex | Knex.Transaction 
 export async function listEvents(planId: number): Promise<PlanEvent[]> {
   const rows = await useDb()('plan_events').where({ plan_id: planId }).orderBy([{ column: 'created_at' }, { column: 'id' }])
   return rows.map(r => ({ id: r.id, userName: r.user_name, role: r.role, kind: r.kind, fromStatus: r.from_status, toStatus: r.to_status, remarks: r.remarks, createdAt: iso(r.created_at)! }))
-}
-
-function legTableFor(plan: Pick<PlanDetail, 'departureUtc' | 'speedKn'>, waypoints: Waypoint[], helmDelayS = 0) {
-  return computeLegTable(waypoints, plan.departureUtc, plan.speedKn, { helmDelayS })
 }
 
 // One query for what a plan view reads besides the plan row: its waypoints and history as JSON
