@@ -20,7 +20,7 @@ port_in_use "$SMTP_PORT" && die "port $SMTP_PORT (SMTP fake for the tests) is ta
 start_mail_fake "$SMTP_PORT" "$PW_MAIL_DIR"
 cleanup() {
   [ -n "$MAIL_PID" ] && kill "$MAIL_PID" 2>/dev/null || true
-  [ "${PG_STARTED_HERE:-0}" = 1 ] && stop_postgres
+  if [ "${PG_STARTED_HERE:-0}" = 1 ]; then stop_postgres; fi
 }
 trap cleanup EXIT INT TERM
 
