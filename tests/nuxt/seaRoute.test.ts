@@ -52,6 +52,14 @@ describe('routing API', () => {
     }
   })
 
+  it('routes from a mid-ocean position, far from any graph node, without moving it', async () => {
+    // 0°, 140°W: open Pacific, hundreds of miles from land (from memory).
+    const res = await api.request('/api/routing/sea', { method: 'POST', body: { from: { lat: 0, lon: -140 }, to: { lat: 10, lon: -150 } } })
+    expect(res.status).toBe(200)
+    expect(res.body.moved).toEqual({})
+    expect(res.body.waypoints[0]).toMatchObject({ lat: 0, lon: -140 })
+  })
+
   it('refuses an end far inland with 422 naming it', async () => {
     // The central Sahara, hundreds of miles from the sea (from memory).
     const res = await api.request('/api/routing/sea', { method: 'POST', body: { from: ROTTERDAM, to: { lat: 23, lon: 13 } } })

@@ -1,48 +1,21 @@
 // The sea router against the routing coastline (Natural Earth 1:10m) and published distances.
 // Port positions are the demo places (public coordinates) or, where named, from memory.
 import { describe, expect, it } from 'vitest'
-import { G, geod } from '../../shared/utils/engine/wgs84'
-import { normaliseLongitude } from '../../shared/utils/position'
 import { useSeaGraph } from '../../server/utils/routing/graphStore'
 import { seaRoute } from '../../server/utils/routing/seaRoute'
-import { chordCrossesLand, isRoutingLand } from '../../server/utils/routing/coast'
+import { EndError } from '../../server/utils/routing/ends'
+import { isRoutingLand } from '../../server/utils/routing/coast'
+import { geodesicNm, landPoints as landPointsOn, legSum } from '../support/seaRouteChecks'
 import type { SeaRouteResult } from '../../shared/types/routing'
 
 const graph = await useSeaGraph()
 const land = graph.land
+const landPoints = (r: SeaRouteResult) => landPointsOn(land, r)
 
 const ROTTERDAM = { lat: 51.95, lon: 4.14 }
 const SINGAPORE = { lat: 1.264, lon: 103.84 }
 const NEW_YORK = { lat: 40.684, lon: -74.044 }
 const LOS_ANGELES = { lat: 33.72, lon: -118.27 }
-
-/** Every leg densified every nm on the geodesic: no point on land, no chord across a coastline edge, outside passages. */
-function landPoints(r: SeaRouteResult): string[] {
-  const bad: string[] = []
-  for (let i = 0; i + 1 < r.waypoints.length; i++) {
-    const a = r.waypoints[i]!, b = r.waypoints[i + 1]!
-    if (a.passageId && a.passageId === b.passageId) continue
-    const line = geod.InverseLine(a.lat, a.lon, b.lat, b.lon, G.LATITUDE | G.LONGITUDE | G.DISTANCE_IN)
-    const n = Math.max(1, Math.ceil(line.s13 / 1852))
-    let prev = { lat: a.lat, lon: a.lon }
-    for (let k = 1; k <= n; k++) {
-      const p = k === n ? { lat: b.lat, lon: b.lon } : (({ lat2, lon2 }) => ({ lat: lat2!, lon: lon2! }))(line.Position((line.s13 * k) / n, G.LATITUDE | G.LONGITUDE))
-      const bx = prev.lon + normaliseLongitude(p.lon - prev.lon)
-      if (isRoutingLand(land, p.lat, p.lon) || chordCrossesLand(land, prev.lon, prev.lat, bx, p.lat)) bad.push(`leg ${i} at ${p.lat.toFixed(3)}, ${p.lon.toFixed(3)}`)
-      prev = p
-    }
-  }
-  return bad
-}
-
-function legSum(r: SeaRouteResult): number {
-  let s = 0
-  for (let i = 0; i + 1 < r.waypoints.length; i++) {
-    const a = r.waypoints[i]!, b = r.waypoints[i + 1]!
-    s += geod.Inverse(a.lat, a.lon, b.lat, b.lon).s12! / 1852
-  }
-  return s
-}
 
 describe('sea routes', () => {
   it('takes Rotterdam to Singapore by Suez, within 4 % of the published distance', () => {
@@ -67,5 +40,46 @@ describe('sea routes', () => {
     const r = seaRoute(graph, NEW_YORK, LOS_ANGELES)
     expect(r.via.map(v => v.id)).toContain('panama')
     expect(landPoints(r)).toEqual([])
+  })
+})
+
+describe('route ends', () => {
+  it('joins mid-ocean positions far from any graph node, sailing the geodesic where no land lies between', () => {
+    // 0°, 140°W to 10°N, 150°W in the open Pacific: 1,565,109.099 m (GeodSolve -i, WGS84) = 845.091 nm.
+    const r = seaRoute(graph, { lat: 0, lon: -140 }, { lat: 10, lon: -150 })
+    expect(r.moved).toEqual({})
+    expect(r.waypoints[0]).toMatchObject({ lat: 0, lon: -140 })
+    expect(r.waypoints.at(-1)).toMatchObject({ lat: 10, lon: -150 })
+    expect(r.distanceNm).toBeCloseTo(1565109.099 / 1852, 2)
+    // 30°S, 20°W to 45°S, 10°E in the South Atlantic: 3,104,263.726 m (GeodSolve -i) = 1,676.168 nm.
+    const s = seaRoute(graph, { lat: -30, lon: -20 }, { lat: -45, lon: 10 })
+    expect(s.distanceNm).toBeCloseTo(3104263.726 / 1852, 2)
+  })
+
+  it('moves a position the coarse coastline puts ashore to the nearest water and says by how much', () => {
+    // Leiden lies some 4–5 nm inland of the North Sea beach at Katwijk (from memory).
+    const leiden = { lat: 52.16, lon: 4.49 }
+    expect(isRoutingLand(land, leiden.lat, leiden.lon)).toBe(true)
+    const r = seaRoute(graph, leiden, { lat: 52.0, lon: 3.5 })
+    expect(r.moved.from).toBeGreaterThan(3)
+    expect(r.moved.from).toBeLessThan(8)
+    expect(r.moved.to).toBeUndefined()
+    const start = r.waypoints[0]!
+    expect(isRoutingLand(land, start.lat, start.lon)).toBe(false)
+    // `moved` is the distance from the position asked for to the first waypoint (the README's contract).
+    expect(Math.abs(geodesicNm(leiden, start) - r.moved.from!)).toBeLessThan(0.05)
+    expect(landPoints(r)).toEqual([])
+  })
+
+  it('refuses a position more than 20 nm from navigable water, naming the end', () => {
+    // Seville lies some 30 nm up the Guadalquivir from the sea at Sanlúcar (from memory).
+    expect(() => seaRoute(graph, { lat: 37.38, lon: -5.99 }, { lat: 36, lon: -8 })).toThrow(EndError)
+    try { seaRoute(graph, { lat: 36, lon: -8 }, { lat: 37.38, lon: -5.99 }) }
+    catch (e) {
+      expect(e).toBeInstanceOf(EndError)
+      expect((e as EndError).field).toBe('to')
+      expect((e as EndError).message).toMatch(/^to lies more than 20 nm from navigable water/)
+    }
+    expect.assertions(4)
   })
 })

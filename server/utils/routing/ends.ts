@@ -42,24 +42,55 @@ export function placeEnd(g: SeaGraph, field: 'from' | 'to', lat: number, lon: nu
   throw new EndError(field, `${field} lies more than ${MAX_END_MOVE_NM} nm from navigable water`)
 }
 
-const JOIN_RADII_NM = [8, 20, 40]
+/**
+ * Rings searched for graph nodes an end can see. Offshore the quadtree leaves are up to 2° of
+ * latitude (about 120 nm, wider in longitude at high latitudes), so a mid-ocean end may lie some
+ * 100 nm from the nearest node; the outer rings reach well past that.
+ */
+const JOIN_RADII_NM = [8, 20, 40, 80, 160, 320]
 const MAX_JOINS = 8
+/** Line-of-sight tests an end may spend before giving up (each is cheap offshore, dear along a coast). */
+const MAX_SIGHT_TESTS = 64
 
 /** Graph nodes an end sees (clear of land), nearest first, with the cost of the joining leg. */
 export function joinEnd(g: SeaGraph, end: RouteEnd, clearanceNm: number, limitLat: number): Seed[] {
+  const tried = new Set<number>()
   for (const radius of JOIN_RADII_NM) {
     const near = nodesWithin(g.index, end.lat, end.lon, radius)
-      .filter(v => Math.abs(g.lat[v]!) <= limitLat)
+      .filter(v => !tried.has(v) && Math.abs(g.lat[v]!) <= limitLat)
       .map(v => ({ v, nm: localNm(end.lat, end.lon, g.lat[v]!, g.lon[v]!) }))
       .filter(c => c.nm <= radius).sort((a, b) => a.nm - b.nm)
     const seeds: Seed[] = []
     for (const { v, nm } of near) {
-      if (seeds.length >= MAX_JOINS) break
+      if (seeds.length >= MAX_JOINS || tried.size >= MAX_SIGHT_TESTS) break
+      tried.add(v)
       if (!legClear(g.sight, end.lat, end.lon, g.lat[v]!, g.lon[v]!, 0, limitLat)) continue
       const c = Math.min(end.clearNm, g.clearNm[v]!)
       seeds.push({ node: v, costNm: nm * (c >= clearanceNm ? 1 : 1 + CLEARANCE_PENALTY * (1 - c / clearanceNm)) })
     }
-    if (seeds.length) return seeds
+    if (seeds.length || tried.size >= MAX_SIGHT_TESTS) return seeds
   }
   return []
+}
+
+/**
+ * An end placed in water no graph node can see from it (a lagoon the coarse coastline closes):
+ * moved onto the nearest graph node within MAX_END_MOVE_NM of the position asked for, if any.
+ */
+export function endOnNearestNode(g: SeaGraph, field: 'from' | 'to', lat: number, lon: number, limitLat: number): { end: RouteEnd, seeds: Seed[] } {
+  const near = nodesWithin(g.index, lat, lon, MAX_END_MOVE_NM)
+    .filter(v => Math.abs(g.lat[v]!) <= limitLat && !g.nodePassage[v])
+    .map(v => ({ v, nm: localNm(lat, lon, g.lat[v]!, g.lon[v]!) }))
+    .filter(c => c.nm <= MAX_END_MOVE_NM).sort((a, b) => a.nm - b.nm)
+  const best = near[0]
+  if (!best) throw new EndError(field, `${field} lies more than ${MAX_END_MOVE_NM} nm from navigable water the sea graph reaches`)
+  const v = best.v
+  return { end: { lat: g.lat[v]!, lon: g.lon[v]!, movedNm: best.nm, clearNm: g.clearNm[v]! }, seeds: [{ node: v, costNm: 0 }] }
+}
+
+/** A route end placed on navigable water and joined to the graph: the nodes it sees, else the nearest node within reach. */
+export function joinedEnd(g: SeaGraph, field: 'from' | 'to', lat: number, lon: number, clearanceNm: number, limitLat: number): { end: RouteEnd, seeds: Seed[] } {
+  const end = placeEnd(g, field, lat, lon)
+  const seeds = joinEnd(g, end, clearanceNm, limitLat)
+  return seeds.length ? { end, seeds } : endOnNearestNode(g, field, lat, lon, limitLat)
 }

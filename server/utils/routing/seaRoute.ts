@@ -12,7 +12,7 @@ import type { LatLon } from '#shared/types/geo'
 import { prepareAreas } from './areas'
 import type { PreparedAreas } from './areas'
 import { coastDistanceNm } from './coast'
-import { EndError, joinEnd, placeEnd } from './ends'
+import { EndError, joinedEnd } from './ends'
 import type { RouteEnd } from './ends'
 import { aStar } from './search'
 import type { CostModel } from './search'
@@ -168,15 +168,11 @@ export function seaRoute(g: SeaGraph, fromPos: LatLon, toPos: LatLon, opts: SeaR
     for (const [field, p] of [['from', fromPos], ['to', toPos]] as const) {
       if (Math.abs(p.lat) > q.limitLat) throw new EndError(field, `${field} lies beyond the limiting latitude ${q.limitLat}°`)
     }
-    const from = placeEnd(g, 'from', fromPos.lat, fromPos.lon)
-    const to = placeEnd(g, 'to', toPos.lat, toPos.lon)
+    const { end: from, seeds: sources } = joinedEnd(g, 'from', fromPos.lat, fromPos.lon, q.clearanceNm, q.limitLat)
+    const { end: to, seeds: targets } = joinedEnd(g, 'to', toPos.lat, toPos.lon, q.clearanceNm, q.limitLat)
     const moved: SeaRouteResult['moved'] = {}
     if (from.movedNm > 0) moved.from = from.movedNm
     if (to.movedNm > 0) moved.to = to.movedNm
-    const sources = joinEnd(g, from, q.clearanceNm, q.limitLat)
-    if (!sources.length) throw new EndError('from', `from lies more than ${20} nm from the navigable graph`)
-    const targets = joinEnd(g, to, q.clearanceNm, q.limitLat)
-    if (!targets.length) throw new EndError('to', `to lies more than ${20} nm from the navigable graph`)
     const path = aStar(g, sources, targets, to, q.model)
     if (!path) throw new NoRouteError('No sea route joins from and to under these settings')
     return describeRoute(g, q, routeThrough(g, q, from, to, path.nodes), moved)
