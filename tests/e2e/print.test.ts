@@ -1,19 +1,29 @@
 import { fileURLToPath } from 'node:url'
-import { describe, expect, it } from 'vitest'
-import { loginAs, startServer } from '../support/server'
+import { beforeAll, describe, expect, it } from 'vitest'
+import { type Api, loginAs, startServer } from '../support/server'
 import { openPage, shoot, signIn, useBrowser } from '../support/browser'
+import { expectStatus, makePlan } from '../support/records'
 
 await startServer()
 const browser = useBrowser()
 
-async function planIdByStatus(status: string) {
-  const plans = (await (await loginAs('master')).request('/api/plans')).body as { id: number, status: string }[]
-  return plans.find(p => p.status === status)!.id
-}
+// The seeded North Pacific crossing's positions (Yokohama – Juan de Fuca), for a draft across 180°.
+const PACIFIC = [
+  { name: 'Nojima Zaki offing', lat: 34.85, lon: 139.95, method: 'rhumb' },
+  { name: 'Juan de Fuca Strait entrance', lat: 48.495, lon: -124.8, method: 'geodesic' },
+  { name: 'Port Angeles pilot station', lat: 48.142, lon: -123.4, method: 'rhumb' },
+]
+
+let planner: Api, master: Api
+beforeAll(async () => {
+  planner = await loginAs('planner')
+  master = await loginAs('master')
+})
 
 describe('printable plan', () => {
   it('the master prints an approved plan: header, chart, legs, sign-off and cautions on A4', async () => {
-    const id = await planIdByStatus('approved')
+    const id = await makePlan('approved', { planner, master }, { title: 'Print test – approved' })
+    const { plan: stored } = await expectStatus<{ plan: { approvedAt: string } }>(planner.request(`/api/plans/${id}`), 200)
     const page = await browser.newPage(688, 1000)
     await signIn(page, 'master')
     await openPage(page, `/plans/${id}/print`)
@@ -21,7 +31,7 @@ describe('printable plan', () => {
     await plan.waitFor()
     expect(await page.getByTestId('signed-in-user').count()).toBe(0)
     expect(await page.getByTestId('print-header').textContent()).toMatch(/IMO \d{7}/)
-    expect(await page.getByTestId('print-approved').textContent()).toMatch(/Capt\..*2026-11-20 08:30Z/)
+    expect(await page.getByTestId('print-approved').textContent()).toBe(`Capt. Mirela Oduya, ${stored.approvedAt.slice(0, 16).replace('T', ' ')}Z`) // master of Kestrel Dawn in the seed; time as stored, to the minute
     expect(await page.getByTestId('print-not-approved').count()).toBe(0)
     expect(await page.getByTestId('print-legs').locator('tbody tr').count()).toBeGreaterThan(2)
     const cautions = await page.getByTestId('print-cautions').textContent()
@@ -38,7 +48,7 @@ describe('printable plan', () => {
   })
 
   it('a plan not yet approved prints with a prominent NOT APPROVED box', async () => {
-    const id = await planIdByStatus('submitted')
+    const id = await makePlan('submitted', { planner }, { title: 'Print test – submitted' })
     const page = await browser.newPage(688, 1000)
     await signIn(page, 'planner')
     await openPage(page, `/plans/${id}/print`)
@@ -49,8 +59,7 @@ describe('printable plan', () => {
   })
 
   it('a draft across the 180° meridian prints its chart as one track', async () => {
-    const plans = (await (await loginAs('planner')).request('/api/plans')).body as { id: number, title: string }[]
-    const id = plans.find(p => p.title.startsWith('Yokohama'))!.id
+    const id = await makePlan('draft', { planner }, { title: 'Print test – Pacific draft', waypoints: PACIFIC })
     const page = await browser.newPage(688, 1000)
     await signIn(page, 'planner')
     await openPage(page, `/plans/${id}/print`)

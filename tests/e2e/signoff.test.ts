@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { loginAs, startServer, url } from '../support/server'
 import { startInstance, type Instance } from '../support/instances'
 import { mailsFor } from '../support/mail'
+import { waitForOutboxSettled } from '../support/outbox'
 import { openPage, shoot, signIn, useBrowser } from '../support/browser'
 
 await startServer()
@@ -51,7 +52,7 @@ describe('sign-off and crew brief across two instances', () => {
     await openPage(planner, `${url('')}/outbox`)
     await planner.getByTestId('outbox-table').locator('[data-state="sent"]').first().waitFor()
     await shoot(planner, 'outbox-sent')
-    await new Promise(r => setTimeout(r, 2000))
+    await waitForOutboxSettled([message.id])
     expect(deliveredFor(message.id)).toHaveLength(1)
   })
 })

@@ -12,6 +12,7 @@ import { PLANNING_CAUTION, LAND_CHECK_CAUTION } from '#shared/utils/cautions'
 import { type Api, loginAs, rootDir, startServer } from '../support/server'
 import { freePort } from '../support/instances'
 import { mailsFor } from '../support/mail'
+import { waitForOutboxSettled } from '../support/outbox'
 
 await startServer({ NUXT_OUTBOX_WORKER: 'off' })
 
@@ -162,7 +163,7 @@ describe('delivery', () => {
     const second = await startWorker(`smtp://127.0.0.1:${smtpPort}`)
     for (const id of [retried.id, orphaned.id])
       await waitFor(`message ${id} to be sent`, async () => (await row(id))?.state === 'sent', 90_000)
-    await new Promise(resolve => setTimeout(resolve, 5000)) // time for any duplicate to show up
+    await waitForOutboxSettled([retried.id, orphaned.id])
     for (const id of [retried.id, orphaned.id]) {
       const mails = mailsFor(mailDir, id)
       expect(mails, `message ${id}`).toHaveLength(1)
@@ -185,7 +186,7 @@ describe('delivery', () => {
     await boss.stop({ graceful: false })
     const [a, b] = await Promise.all([startWorker(mainSmtpUrl), startWorker(mainSmtpUrl)])
     await waitFor('the raced message to be sent', async () => (await row(queued.id))?.state === 'sent')
-    await new Promise(resolve => setTimeout(resolve, 3000))
+    await waitForOutboxSettled([queued.id]) // all four jobs for the row done, none still held
     expect(mailsFor(mainMailDir, queued.id)).toHaveLength(1)
     expect((await row(queued.id)).attempts).toBe(1)
     await Promise.all([stop(a), stop(b)])

@@ -1,6 +1,6 @@
 import { execFileSync } from 'node:child_process'
 import { beforeAll, describe, expect, it } from 'vitest'
-import { computeLegTable } from '#shared/utils/legTable'
+import { angleDiff, runOracle } from '../unit/support/oracle'
 import { loginAs, startServer, type Api } from '../support/server'
 
 await startServer()
@@ -79,23 +79,61 @@ describe('plans API: create, save waypoints, version lock', () => {
     expect((await planner.request(`/api/plans/${id}`)).body.plan.version).toBe(2)
   })
 
-  it('serves the leg table the shared engine computes, and its geodesic distance agrees with GeodSolve', async () => {
-    const { body } = await planner.request(`/api/plans/${id}`)
-    const engine = computeLegTable(body.waypoints, body.plan.departureUtc, body.plan.speedKn)
-    expect(body.legs).toHaveLength(engine.legs.length)
+  it('serves a leg table whose distances and courses agree with GeodSolve and RhumbSolve on every leg', async () => {
+    // A second plan with legs of each kind: rhumb lines down the coast and along a parallel, geodesics across the equator and an ocean.
+    const vessels = (await planner.request('/api/vessels')).body as { id: number }[]
+    const made = await planner.request('/api/plans', { method: 'POST', body: { vesselId: vessels[0]!.id, title: 'Test passage, Channel to the Indian Ocean', departureUtc: '2027-03-01T06:00:00Z', speedKn: 12 } })
+    expect(made.status).toBe(201)
+    const route = [
+      { name: 'Lizard offing', lat: 49.85, lon: -5.2 },
+      { name: 'Ushant offing', lat: 48.6, lon: -5.4, method: 'rhumb' },
+      { name: 'Finisterre offing', lat: 43.0, lon: -9.6, method: 'rhumb', speedKn: 14 },
+      { name: 'Off Recife', lat: -8.0, lon: -34.5, method: 'geodesic' },
+      { name: 'Cape of Good Hope offing', lat: -34.55, lon: 18.45, method: 'geodesic', speedKn: 13.5 },
+      { name: 'Agulhas Bank south', lat: -40, lon: 20, method: 'rhumb' },
+      { name: 'Forty south, 60 east', lat: -40, lon: 60, method: 'rhumb' },
+    ]
+    expect((await planner.request(`/api/plans/${made.body.id}/waypoints`, { method: 'PUT', body: { version: 1, waypoints: route } })).status).toBe(200)
+    const { body } = await planner.request(`/api/plans/${made.body.id}`)
+    expect(body.legs).toHaveLength(route.length - 1)
+    const pairs = route.slice(1).map((b, i) => `${route[i]!.lat} ${route[i]!.lon} ${b.lat} ${b.lon}`)
+    const geod = runOracle('GeodSolve', ['-i', '-p', '9'], pairs) // azi1 azi2 s12
+    const rhumb = runOracle('RhumbSolve', ['-i', '-p', '9'], pairs) // azi12 s12
+    let etaMs = Date.parse('2027-03-01T06:00:00Z'), totalNm = 0
     body.legs.forEach((leg: any, i: number) => {
-      const e = engine.legs[i]!
-      expect(leg.method).toBe(e.method)
-      expect(leg.distanceNm).toBeCloseTo(e.distanceNm, 9)
-      expect(leg.hours).toBeCloseTo(e.hours, 9)
-      expect(leg.etaUtc).toBe(e.etaUtc)
+      const to = route[i + 1]!
+      const [azi1, azi2, geodM] = geod[i]!
+      const [azi12, rhumbM] = rhumb[i]!
+      expect(leg.method, `leg ${i + 1}`).toBe(to.method)
+      expect(Math.abs(leg.rhumbDistanceNm - rhumbM! / 1852), `leg ${i + 1} rhumb distance`).toBeLessThan(1e-6) // RhumbSolve
+      expect(Math.abs(angleDiff(leg.rhumbCourse, azi12!)), `leg ${i + 1} rhumb course`).toBeLessThan(1e-9) // RhumbSolve
+      if (to.method === 'geodesic') {
+        expect(Math.abs(leg.distanceNm - geodM! / 1852), `leg ${i + 1} distance`).toBeLessThan(1e-6) // GeodSolve
+        expect(Math.abs(angleDiff(leg.initialCourse, azi1!)), `leg ${i + 1} initial course`).toBeLessThan(1e-9) // GeodSolve
+        expect(Math.abs(angleDiff(leg.finalCourse, azi2!)), `leg ${i + 1} final course`).toBeLessThan(1e-9) // GeodSolve
+        expect(Math.abs(leg.savingNm - (rhumbM! - geodM!) / 1852)).toBeLessThan(1e-6)
+      }
+      else {
+        expect(Math.abs(leg.distanceNm - rhumbM! / 1852), `leg ${i + 1} distance`).toBeLessThan(1e-6) // RhumbSolve
+        expect(Math.abs(angleDiff(leg.course, azi12!)), `leg ${i + 1} course`).toBeLessThan(1e-9) // RhumbSolve
+      }
+      // Time on the leg at the arriving waypoint's speed, else the plan's 12 kn.
+      const speedKn = to.speedKn ?? 12
+      expect(leg.speedKn).toBe(speedKn)
+      totalNm += leg.distanceNm
+      etaMs += leg.distanceNm / speedKn * 3_600_000
+      expect(Math.abs(Date.parse(leg.etaUtc) - etaMs), `leg ${i + 1} ETA`).toBeLessThan(1000)
     })
-    expect(body.totals.distanceNm).toBeCloseTo(engine.totals.distanceNm, 9)
-    expect(body.totals.etaUtc).toBe(engine.totals.etaUtc)
-    const ocean = body.legs[0]
-    expect(ocean.method).toBe('geodesic')
-    expect(ocean.speedKn).toBe(15)
-    expect(ocean.distanceNm).toBeCloseTo(geodSolveNm(waypoints[0]!, waypoints[1]!), 6)
+    // Along the parallel at 40°S the rhumb course is due east (RhumbSolve gives 90 too).
+    expect(body.legs.at(-1).course).toBe(90)
+    expect(Math.abs(body.totals.distanceNm - totalNm)).toBeLessThan(1e-6)
+    expect(Math.abs(Date.parse(body.totals.etaUtc) - etaMs)).toBeLessThan(1000)
+
+    // The first plan's ocean leg: geodesic at its own 15 kn.
+    const first = (await planner.request(`/api/plans/${id}`)).body.legs[0]
+    expect(first.method).toBe('geodesic')
+    expect(first.speedKn).toBe(15)
+    expect(first.distanceNm).toBeCloseTo(geodSolveNm(waypoints[0]!, waypoints[1]!), 6)
   })
 
   it('lets shore read but not edit (403)', async () => {

@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { demoUsers, DEMO_PASSWORD, type DemoUser } from '../support/server'
 import { startInstance, type Instance } from '../support/instances'
 import { mailsFor } from '../support/mail'
+import { waitForOutboxSettled } from '../support/outbox'
 
 let a: Instance, b: Instance
 beforeAll(async () => {
@@ -52,8 +53,8 @@ describe('two instances behind one database', () => {
     const outboxId = brief.body.id ?? brief.body.message?.id
     const delivered = () => mailsFor(process.env.PW_MAIL_DIR!, outboxId)
     await expect.poll(() => delivered().length, { timeout: 60_000, interval: 500 }).toBe(1)
-    // Both workers have had time to pick it up again if they were going to.
-    await new Promise(r => setTimeout(r, 3000))
+    // Counted again once no job for the message is left for either worker.
+    await waitForOutboxSettled([outboxId])
     expect(delivered()).toHaveLength(1)
     const outbox = (await call(b.url, planner, '/api/outbox')).body as any[]
     expect(outbox.find(m => m.id === outboxId)?.state).toBe('sent')

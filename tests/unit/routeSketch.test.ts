@@ -18,9 +18,17 @@ describe('route sketch', () => {
       expect(x).toBeGreaterThanOrEqual(0); expect(x).toBeLessThan(k)
       expect(y).toBeGreaterThanOrEqual(0); expect(y).toBeLessThan(k)
     }
-    const xs = s.line.split(' ').map(p => Number(p.split(',')[0]))
+    const linePoints = s.line.split(' ').map(p => p.split(',').map(Number) as [number, number])
+    // Densified every 25 nm over some 4,000 nm: well over a hundred points, each inside the view.
+    expect(linePoints.length).toBeGreaterThan(100)
+    for (const [x, y] of linePoints) {
+      expect(x).toBeGreaterThan(box(s).x); expect(x).toBeLessThan(box(s).x + box(s).w)
+      expect(y).toBeGreaterThan(box(s).y); expect(y).toBeLessThan(box(s).y + box(s).h)
+    }
+    const xs = linePoints.map(p => p[0])
     const biggestStep = Math.max(...xs.slice(1).map((x, i) => Math.abs(x - xs[i]!)))
     expect(biggestStep).toBeLessThan(box(s).w / 4) // no jump back across the chart at 180°
+    expect(s.points).toHaveLength(4) // one mark per waypoint, so the bounds below check every one
     for (const p of s.points) {
       expect(p.x).toBeGreaterThan(box(s).x); expect(p.x).toBeLessThan(box(s).x + box(s).w)
       expect(p.y).toBeGreaterThan(box(s).y); expect(p.y).toBeLessThan(box(s).y + box(s).h)

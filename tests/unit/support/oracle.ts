@@ -36,8 +36,11 @@ export class WorstErrors {
     const cur = this.rows.get(key)
     if (!cur || v > cur.value || Number.isNaN(v)) this.rows.set(key, { value: v, at })
   }
+  /** The worst difference recorded under `key`; throws for a key never recorded, so a misspelt key cannot pass. */
   get(key: string): number {
-    return this.rows.get(key)?.value ?? 0
+    const row = this.rows.get(key)
+    if (!row) throw new Error(`no differences recorded under "${key}"`)
+    return row.value
   }
   print(title: string) {
     const lines = [...this.rows.entries()].map(([k, { value, at }]) => `  ${k.padEnd(42)} ${value.toExponential(3).padStart(11)}   (${at})`)
