@@ -19,7 +19,9 @@ const apiErrorHandler: NitroErrorHandler = (error, event) => {
   let statusCode: number = anyError.statusCode || 500
   let message: string = anyError.statusMessage || (statusCode < 500 && anyError.message) || 'Server error'
   const issues: Issue[] | undefined = anyError.data?.issues ?? anyError.cause?.issues
+  const conflict = statusCode >= 500 ? databaseConflict(error) : null
   if (statusCode === 400 && Array.isArray(issues)) message = issueText(issues)
+  else if (conflict) ({ statusCode, message } = conflict)
   else if (isDatabaseUnavailable(error)) { statusCode = 503; message = 'The database is not reachable at the moment; try again shortly' }
   else if (statusCode >= 500) {
     console.error(`[api error] ${event.method} ${event.path}`, error)
@@ -29,6 +31,7 @@ const apiErrorHandler: NitroErrorHandler = (error, event) => {
   setResponseStatus(event, statusCode)
   setResponseHeader(event, 'content-type', 'application/json')
   if (statusCode === 503) setResponseHeader(event, 'retry-after', 5)
+  if (statusCode === 429 && Number.isFinite(anyError.data?.retryAfterS)) setResponseHeader(event, 'retry-after', anyError.data.retryAfterS)
   const data = statusCode < 500 ? (Array.isArray(issues) ? { issues: issues.map(i => ({ path: i.path, message: i.message })) } : anyError.data) : undefined
   return send(event, JSON.stringify({ statusCode, statusMessage: message, message, data }))
 }

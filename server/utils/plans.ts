@@ -102,16 +102,28 @@ export async function assertVesselInCompany(user: SessionUser, vesselId: number,
   if (!vessel) throw createError({ statusCode: 400, statusMessage: 'vesselId: no such vessel in your company' })
 }
 
-/** The plan's first (and last) waypoints from its departure and arrival places in the user's company. */
-async function waypointsFromPlaces(user: SessionUser, input: PlanCreateInput, db: Knex.Transaction): Promise<Waypoint[]> {
+type PlaceEnds = Pick<PlanCreateInput, 'departurePlaceId' | 'arrivalPlaceId'>
+interface EndPlace { name: string, lat: number, lon: number }
+
+/**
+ * The departure and arrival places a body names, each in the user's company; 400 naming the field
+ * otherwise, the same answer for another company's place and one that does not exist.
+ */
+async function endPlaces(user: SessionUser, input: PlaceEnds, db: Knex | Knex.Transaction): Promise<EndPlace[]> {
   const ends = [['departurePlaceId', input.departurePlaceId], ['arrivalPlaceId', input.arrivalPlaceId]] as const
-  const list: Waypoint[] = []
+  const list: EndPlace[] = []
   for (const [field, id] of ends) {
     if (id == null) continue
     const place = await db('places').where({ id, company_id: user.companyId }).first('name', 'lat', 'lon')
     if (!place) throw createError({ statusCode: 400, statusMessage: `${field}: no such place in your company` })
-    list.push({ name: place.name, lat: place.lat, lon: place.lon, method: list.length ? 'geodesic' : 'rhumb' })
+    list.push(place)
   }
+  return list
+}
+
+/** The plan's first (and last) waypoints from its departure and arrival places. */
+function waypointsFromPlaces(places: EndPlace[]): Waypoint[] {
+  const list: Waypoint[] = places.map((p, i) => ({ name: p.name, lat: p.lat, lon: p.lon, method: i ? 'geodesic' : 'rhumb' }))
   // The same place at both ends (a round trip) starts with the departure only.
   return list.length === 2 && list[0]!.lat === list[1]!.lat && list[0]!.lon === list[1]!.lon ? list.slice(0, 1) : list
 }
@@ -119,7 +131,8 @@ async function waypointsFromPlaces(user: SessionUser, input: PlanCreateInput, db
 export async function createPlan(user: SessionUser, input: PlanCreateInput, waypoints: Waypoint[] = []) {
   return useDb().transaction(async (trx) => {
     await assertVesselInCompany(user, input.vesselId, trx)
-    if (input.startFromPlaces && !waypoints.length) waypoints = await waypointsFromPlaces(user, input, trx)
+    const places = await endPlaces(user, input, trx)
+    if (input.startFromPlaces && !waypoints.length) waypoints = waypointsFromPlaces(places)
     const [row] = await trx('plans').insert({
       company_id: user.companyId, vessel_id: input.vesselId, title: input.title, departure_utc: input.departureUtc, speed_kn: input.speedKn,
       limit_lat: input.limitLat ?? null, departure_place_id: input.departurePlaceId ?? null, arrival_place_id: input.arrivalPlaceId ?? null, created_by: user.id,
@@ -171,6 +184,7 @@ export async function updatePlanHeader(user: SessionUser, id: number, input: Pla
   await useDb().transaction(async (trx) => {
     const plan = await findPlan(user, id, trx)
     assertEditable(plan)
+    await endPlaces(user, input, trx)
     await bumpVersion(trx, plan, input.version, {
       title: input.title, departure_utc: input.departureUtc, speed_kn: input.speedKn, limit_lat: input.limitLat ?? null,
       departure_place_id: input.departurePlaceId ?? null, arrival_place_id: input.arrivalPlaceId ?? null,

@@ -9,6 +9,8 @@ export const zoneKindSchema = z.enum(ZONE_KINDS, { error: 'kind must be one of e
 const dayPattern = /^\d{4}-\d{2}-\d{2}$/
 const daySchema = z.string({ error: 'must be a date (YYYY-MM-DD)' }).regex(dayPattern, 'must be a date (YYYY-MM-DD)')
   .refine(d => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d), 'is not a real date')
+  // the years dates and times take everywhere (fields.ts); PostgreSQL has no year 0
+  .refine(d => d >= '1900' && d < '2200', 'must be between the years 1900 and 2199')
 const textSchema = (max: number) => z.string({ error: 'must be text' }).trim().max(max, `is at most ${max} characters`)
   .refine(t => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(t), 'must not contain control characters')
 

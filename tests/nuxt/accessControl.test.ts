@@ -4,7 +4,7 @@
 // their role may not call the route at all), so existence never leaks.
 import { beforeAll, describe, expect, it } from 'vitest'
 import type { Role } from '#shared/types/auth'
-import { ALL, RECORD_MAKERS, RULES, pathIds, type AccessRule, type RecordKind } from '../support/accessRules'
+import { ALL, BODY_IDS, RECORD_MAKERS, RULES, pathIds, type AccessRule, type BodyIdKind, type RecordKind } from '../support/accessRules'
 import { type Api, client, loginAs, loginWithEmail, startServer } from '../support/server'
 import { addCompanyUser } from '../support/database'
 import { listApiRoutes, routePath, type ApiRoute } from '../support/apiRoutes'
@@ -69,5 +69,28 @@ describe('access control, every route × every role of two companies', () => {
       const res = await call(larkspur[role], route, ownIds)
       expect(res.status, `${role} of another company`).toBe(roles.includes(role) ? 404 : 403)
     }
+  })
+
+  describe('ids in bodies, scoped to the caller\'s company', () => {
+    const foreign = {} as Record<BodyIdKind, number>
+    beforeAll(async () => {
+      foreign.place = (await larkspur.planner.request('/api/places')).body[0].id
+      foreign.vessel = (await larkspur.planner.request('/api/vessels')).body[0].id
+      foreign.master = (await larkspur.planner.request(`/api/vessels/${foreign.vessel}`)).body.masterUserId
+    })
+
+    it.each(BODY_IDS.map(r => [`${r.route} ${r.field}`, r] as const))('%s: another company\'s record and a missing one get the same 400', async (_name, rule) => {
+      const route = routes.find(r => r.key === rule.route)!
+      const planVersion = (await kestrel.planner.request(`/api/plans/${own.plan}`)).body.plan.version
+      const send = (id: number) => {
+        const body = rule.body(id, { plan: own.plan, vessel: own.vessel, place: own.place, planVersion })
+        const path = routePath(route, pathIds(route.pattern, RULES[route.key]!, own, MISSING_ID))
+        return kestrel[rule.role].request(path, { method: route.method, ...(body instanceof FormData ? { rawBody: body } : { body }) })
+      }
+      const [other, missing] = [await send(foreign[rule.kind]), await send(MISSING_ID)]
+      expect([other.status, missing.status], JSON.stringify([other.body, missing.body]).slice(0, 300)).toEqual([400, 400])
+      expect(other.body.message).toMatch(new RegExp(`^${rule.field}: `))
+      expect(other.body.message.replace(String(foreign[rule.kind]), '#')).toBe(missing.body.message.replace(String(MISSING_ID), '#'))
+    })
   })
 })

@@ -93,6 +93,37 @@ export function pathIds(pattern: string, rule: AccessRule, ids: Partial<Record<R
   }))
 }
 
+/** The kinds of record a body's id fields name. */
+export type BodyIdKind = 'place' | 'vessel' | 'master'
+export interface BodyIdRule {
+  route: string
+  field: string
+  kind: BodyIdKind
+  role: Role
+  /** A body that is well formed apart from `id` in `field`; `own` holds the caller's company's records. */
+  body: (id: number, own: { plan: number, vessel: number, place: number, planVersion: number }) => unknown | FormData
+}
+
+const planBody = (vesselId: number, extra: Record<string, unknown> = {}) => ({ vesselId, title: 'Scope probe', departureUtc: '2027-01-01T00:00:00Z', speedKn: 12, ...extra })
+const importForm = (vesselId: number) => csvUpload('name,latitude,longitude\nA,52,3.9\nB,52.6,3.4\n', { mode: 'create', vesselId: String(vesselId), title: 'Scope probe', departureUtc: '2027-01-01T00:00:00Z', speedKn: '12' })()
+
+/**
+ * Every id a request body carries (issue: another company's places in a plan). The access suite
+ * sends another company's record and one that does not exist: both 400 naming the field, with the
+ * same message, so a caller learns nothing of other companies' records.
+ */
+export const BODY_IDS: BodyIdRule[] = [
+  { route: 'POST /api/plans', field: 'vesselId', kind: 'vessel', role: 'planner', body: id => planBody(id) },
+  { route: 'POST /api/plans', field: 'departurePlaceId', kind: 'place', role: 'planner', body: (id, own) => planBody(own.vessel, { departurePlaceId: id }) },
+  { route: 'POST /api/plans', field: 'arrivalPlaceId', kind: 'place', role: 'master', body: (id, own) => planBody(own.vessel, { arrivalPlaceId: id, startFromPlaces: true }) },
+  { route: 'PUT /api/plans/:id', field: 'departurePlaceId', kind: 'place', role: 'planner', body: (id, own) => ({ ...planBody(own.vessel, { departurePlaceId: id }), vesselId: undefined, version: own.planVersion }) },
+  { route: 'PUT /api/plans/:id', field: 'arrivalPlaceId', kind: 'place', role: 'master', body: (id, own) => ({ ...planBody(own.vessel, { arrivalPlaceId: id }), vesselId: undefined, version: own.planVersion }) },
+  { route: 'POST /api/plans/import', field: 'vesselId', kind: 'vessel', role: 'planner', body: id => importForm(id) },
+  { route: 'POST /api/tables', field: 'placeIds', kind: 'place', role: 'shore', body: (id, own) => ({ name: 'Scope probe', placeIds: [own.place, id] }) },
+  { route: 'PUT /api/vessels/:id', field: 'masterUserId', kind: 'master', role: 'admin', body: id => ({ name: 'Scope probe', imoNumber: '9074729', callSign: 'ABC1', serviceSpeedKn: 12, masterUserId: id }) },
+  { route: 'POST /api/routing/sea', field: 'vesselId', kind: 'vessel', role: 'planner', body: id => ({ from: { lat: 51.9, lon: 3.9 }, to: { lat: 53.3, lon: 4.2 }, vesselId: id }) },
+]
+
 /** Routes that act on the record without reading a body; the fuzz test leaves them alone. */
 export const BODYLESS = new Set(['POST /api/auth/logout', 'POST /api/plans/:id/submit', 'POST /api/plans/:id/approve', 'POST /api/plans/:id/revise', 'POST /api/plans/:id/brief', 'POST /api/tables/:id/rebuild'])
 
