@@ -16,5 +16,6 @@ export async function fuelForPlan(companyId: number, vesselId: number, legs: rea
   const fuel = planFuel(curve, legs, reserve)
   const grades = await useDb()('vessel_fuel_grades').where({ vessel_id: vesselId }).first('outside', 'inside_eca as insideEca')
   const byGrade = fuelByGrade(fuel.legTonnes, legs, legZones, fuel.reserveTonnes, grades ?? DEFAULT_FUEL_GRADES, fuelPrices ?? [])
-  return { curve, reserve, ...fuel, byGrade, currency: currency ?? 'USD' }
+  const speeds = points.map(p => p.speedKn)
+  return { curve, reserve, ...fuel, byGrade, currency: currency ?? 'USD', dataSpeedKn: { min: Math.min(...speeds), max: Math.max(...speeds) } }
 }

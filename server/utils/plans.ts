@@ -16,6 +16,7 @@ const detailColumns = [
   ...summaryColumns, 'plans.company_id as companyId', 'plans.departure_place_id as departurePlaceId', 'plans.arrival_place_id as arrivalPlaceId',
   'dep.time_zone as departureTimeZone', 'arr.time_zone as arrivalTimeZone', 'plans.revision_of_plan_id as revisionOfPlanId',
   'approver.name as approvedByName', 'plans.approved_at as approvedAt', 'creator.name as createdByName', 'vessels.master_user_id as masterUserId',
+  'vessels.service_speed_kn as vesselServiceSpeedKn',
 ]
 
 const iso = (v: unknown) => (v ? new Date(v as string).toISOString() : null)
@@ -49,7 +50,7 @@ export async function findPlan(user: SessionUser, id: number, db: Knex | Knex.Tr
     .leftJoin('users as approver', 'approver.id', 'plans.approved_by').leftJoin('users as creator', 'creator.id', 'plans.created_by')
     .where({ 'plans.id': id, 'plans.company_id': user.companyId }).first(detailColumns)
   if (!row) notFound('Plan')
-  return { ...toSummary(row), approvedAt: iso(row.approvedAt) } as PlanDetail
+  return { ...toSummary(row), approvedAt: iso(row.approvedAt), vesselServiceSpeedKn: row.vesselServiceSpeedKn == null ? null : Number(row.vesselServiceSpeedKn) } as PlanDetail
 }
 
 export async function loadWaypoints(planId: number, db: Knex | Knex.Transaction = useDb()): Promise<Waypoint[]> {
@@ -128,7 +129,7 @@ function waypointsFromPlaces(places: EndPlace[]): Waypoint[] {
   return list.length === 2 && list[0]!.lat === list[1]!.lat && list[0]!.lon === list[1]!.lon ? list.slice(0, 1) : list
 }
 
-export async function createPlan(user: SessionUser, input: PlanCreateInput, waypoints: Waypoint[] = []) {
+export async function createPlan(user: SessionUser, input: PlanCreateInput, waypoints: Waypoint[] = [], origin: string | null = null) {
   return useDb().transaction(async (trx) => {
     await assertVesselInCompany(user, input.vesselId, trx)
     const places = await endPlaces(user, input, trx)
@@ -138,7 +139,7 @@ export async function createPlan(user: SessionUser, input: PlanCreateInput, wayp
       limit_lat: input.limitLat ?? null, departure_place_id: input.departurePlaceId ?? null, arrival_place_id: input.arrivalPlaceId ?? null, created_by: user.id,
     }).returning('id')
     if (waypoints.length) await writeWaypoints(trx, { id: row.id, companyId: user.companyId, version: 1, status: 'draft', departureUtc: input.departureUtc, speedKn: input.speedKn }, waypoints)
-    await recordEvent(trx, row.id, user, 'created', null, 'draft')
+    await recordEvent(trx, row.id, user, 'created', null, 'draft', origin)
     return { id: row.id as number }
   })
 }

@@ -34,6 +34,14 @@ export const planCreateSchema = z.object({
 })
 export type PlanCreateInput = z.infer<typeof planCreateSchema>
 
+/** A new draft from an earlier plan: the same track, or reversed for the return passage. */
+export const planCopySchema = z.object({
+  reversed: z.boolean({ error: 'reversed must be true or false' }).optional(),
+  title: planCreateSchema.shape.title.optional(),
+  departureUtc: dateTimeUtcSchema.optional(),
+})
+export type PlanCopyInput = z.infer<typeof planCopySchema>
+
 export const waypointsPutSchema = z.object({
   version: versionSchema,
   waypoints: waypointListSchema,
@@ -67,4 +75,6 @@ export interface PlanDetail extends PlanSummary {
   approvedAt: string | null
   createdByName: string | null
   masterUserId: number | null
+  /** The vessel's service speed, for the warning when the plan is faster. */
+  vesselServiceSpeedKn?: number | null
 }

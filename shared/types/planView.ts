@@ -20,6 +20,8 @@ export interface PlanFuel {
   /** Tonnes and cost by fuel grade: the vessel's ECA grade for the distance inside ECAs. */
   byGrade: FuelByGrade[]
   currency: string
+  /** The slowest and fastest speeds of the vessel's fuel data: outside them the curve is extrapolated. */
+  dataSpeedKn?: { min: number, max: number }
 }
 
 /** The plan's distance inside each zone and kind, and whether it enters a no-go or risk area. */

@@ -63,3 +63,17 @@ export interface SeaRouteResult {
 }
 
 export interface PassageSummary { id: string, name: string, kind: PassageKind, transitNm?: number }
+
+/** Distance, distance inside ECAs and fuel cost (null without a vessel's curve and both prices) of one route. */
+export interface RouteFigures { distanceNm: number, ecaNm: number, fuelCost: number | null }
+
+/** What `POST /api/routing/sea` answers: the route with its distance inside each zone, and with `avoidZones: ["eca"]` the shortest route beside it. */
+export interface ZonedSeaRouteResult extends SeaRouteResult {
+  zones: { zoneId: number, name: string, kind: 'eca' | 'no-go' | 'risk' | 'custom', distanceNm: number }[]
+  ecaComparison?: {
+    ecaCostFactor: number
+    shortest: RouteFigures & { waypoints: RouteWaypoint[] }
+    minimumEca: RouteFigures
+    difference: RouteFigures
+  }
+}

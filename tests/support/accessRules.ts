@@ -64,6 +64,7 @@ export const RULES: Record<string, AccessRule> = {
   'POST /api/plans/:id/approve': { roles: ['master'], record: 'plan' },
   'POST /api/plans/:id/return': { roles: ['master'], record: 'plan', body: { remarks: 'Scope probe' } },
   'POST /api/plans/:id/revise': { roles: EDIT, record: 'plan' },
+  'POST /api/plans/:id/copy': { roles: EDIT, record: 'plan', body: { reversed: true } },
   'POST /api/plans/:id/remarks': { roles: ALL, record: 'plan', body: { remarks: 'Scope probe' } },
   'POST /api/plans/:id/brief': { roles: ['planner', 'master', 'shore'], record: 'plan' },
   'GET /api/plans/:id/export': { roles: ALL, record: 'plan', query: '?format=csv' },
