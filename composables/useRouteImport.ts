@@ -6,6 +6,8 @@ import { planCreateSchema } from '#shared/types/plan'
 export interface RouteImportPreview {
   format: 'csv' | 'gpx' | 'rtz'
   routeName: string | null
+  /** What the file says of the voyage (RTZ): its vessel's name, departure time and usual leg speed. */
+  file?: { vesselName: string | null, departureUtc: string | null, speedKn: number | null }
   waypoints: Waypoint[]
   errors: RouteImportIssue[]
   warnings: RouteImportIssue[]

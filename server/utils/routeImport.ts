@@ -67,11 +67,13 @@ export function previewRoute(parsed: ParsedRouteFile, fields: Record<string, str
   const given = planCreateSchema.pick({ departureUtc: true, speedKn: true }).partial()
   const departure = given.shape.departureUtc.safeParse(fields.departureUtc || undefined)
   const speed = given.shape.speedKn.safeParse(numberField(fields.speedKn))
-  const departureUtc = (departure.success && departure.data) || nextFullHourUtc()
-  const speedKn = (speed.success && speed.data) || PREVIEW_SPEED_KN
+  const departureUtc = (departure.success && departure.data) || parsed.departureUtc || nextFullHourUtc()
+  const speedKn = (speed.success && speed.data) || parsed.speedKn || PREVIEW_SPEED_KN
   const table = parsed.errors.length === 0 ? computeLegTable(parsed.waypoints, departureUtc, speedKn) : null
   return {
     format: parsed.format, routeName: parsed.routeName ?? null, waypoints: parsed.waypoints,
+    // What the file itself says of the voyage (RTZ routeInfo and schedules), to fill the header with.
+    file: { vesselName: parsed.vesselName ?? null, departureUtc: parsed.departureUtc ?? null, speedKn: parsed.speedKn ?? null },
     legs: table?.legs ?? [], totals: table?.totals ?? null, errors: parsed.errors, warnings: parsed.warnings,
     assumed: { departureUtc, speedKn, departureGiven: !!(departure.success && departure.data), speedGiven: !!(speed.success && speed.data) },
   }
@@ -79,9 +81,13 @@ export function previewRoute(parsed: ParsedRouteFile, fields: Record<string, str
 
 /** A draft plan from the file, only when the header is valid and every waypoint was read. */
 export async function createPlanFromRoute(user: SessionUser, parsed: ParsedRouteFile, fields: Record<string, string>) {
+  // What the form leaves out comes from the file: its route name, its vessel (by name, in the caller's company), schedule and speed.
+  const vessel = !fields.vesselId && parsed.vesselName
+    ? await useDb()('vessels').where({ company_id: user.companyId }).whereRaw('lower(name) = lower(?)', [parsed.vesselName]).first('id')
+    : undefined
   const header = planCreateSchema.safeParse({
-    vesselId: numberField(fields.vesselId), title: fields.title || parsed.routeName || undefined, departureUtc: fields.departureUtc || undefined,
-    speedKn: numberField(fields.speedKn), limitLat: numberField(fields.limitLat) ?? null,
+    vesselId: numberField(fields.vesselId) ?? vessel?.id, title: fields.title || parsed.routeName || undefined, departureUtc: fields.departureUtc || parsed.departureUtc || undefined,
+    speedKn: numberField(fields.speedKn) ?? parsed.speedKn, limitLat: numberField(fields.limitLat) ?? null,
   })
   if (!header.success) throw validationError(header.error.issues)
   if (parsed.errors.length > 0) {
@@ -89,11 +95,18 @@ export async function createPlanFromRoute(user: SessionUser, parsed: ParsedRoute
     const count = parsed.errors.length
     throw createError({ statusCode: 400, statusMessage: `The file has ${count} error${count === 1 ? '' : 's'}; nothing was created. ${first}`, data: { kind: 'invalid-waypoints', errors: parsed.errors } })
   }
-  return createPlan(user, header.data, parsed.waypoints)
+  // An RTZ file gives every leg its speed: those at the plan's speed are the plan's, so changing it later moves them too.
+  const speedKn = header.data.speedKn
+  const waypoints = parsed.format === 'rtz' ? parsed.waypoints.map(w => (w.speedKn === speedKn ? { ...w, speedKn: null } : w)) : parsed.waypoints
+  return createPlan(user, header.data, waypoints)
 }
 
 /** The plan's route as a file for download (any role of the plan's company). */
 export async function exportPlanRoute(user: SessionUser, id: number, format: RouteFileFormatName) {
   const plan = await findPlan(user, id)
-  return writeRouteFile(format, plan, await loadWaypoints(id))
+  const waypoints = await loadWaypoints(id)
+  // The time at each waypoint, for the schedule of formats that carry one (RTZ).
+  const legs = waypoints.length > 1 ? computeLegTable(waypoints, plan.departureUtc, plan.speedKn).legs : []
+  const times = legs.length ? [plan.departureUtc, ...legs.map(l => l.etaUtc)] : undefined
+  return writeRouteFile(format, { ...plan, times }, waypoints)
 }

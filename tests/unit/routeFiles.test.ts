@@ -135,6 +135,11 @@ describe('RTZ import (IEC 61174 RTZ schema 1.0 / 1.1 element and attribute names
     // speed: manual schedule speed first (14.2 over speedMax 14), else leg speedMax (13.5)
     expect(file.waypoints.map(w => w.speedKn)).toEqual([undefined, 13.5, 14.2, 12])
     expect(file.waypoints[2]!.notes).toBe('Along the parallel')
+    // The voyage besides the waypoints: routeInfo@vesselName, the manual schedule's etd at the first waypoint,
+    // and the speed most legs are planned at (13.5, 14.2 and 12 once each: the first of them).
+    expect(file.vesselName).toBe('Kestrel Tern')
+    expect(file.departureUtc).toBe('2026-03-01T06:00:00.000Z')
+    expect(file.speedKn).toBe(13.5)
   })
 
   it('reads RTZ 1.0 with its "sheduleElement" spelling; unequal XTD sides give the narrower, with a warning', () => {
@@ -314,7 +319,8 @@ describe.each(['csv', 'gpx', 'rtz'] as const)('export → import round trip (%s)
     expect(back.waypoints).toHaveLength(awkward.length)
     back.waypoints.forEach((w, i) => {
       const sent = awkward[i]!
-      expect(w.name).toBe(sent.name)
+      // RTZ names are written in ASCII where ECDIS cannot show the sign: the em dash becomes a hyphen.
+      expect(w.name).toBe(format === 'rtz' ? sent.name!.replace('—', '-') : sent.name)
       expect(Math.abs(w.lat - sent.lat)).toBeLessThan(1e-7)
       // longitudes are written in −180 ≤ λ < 180 (GPX 1.1 and RTZ longitude types): compare modulo 360
       expect(Math.abs(((w.lon - sent.lon + 540) % 360) - 180)).toBeLessThan(1e-7)
@@ -344,6 +350,33 @@ describe('writers', () => {
     expect(text).not.toMatch(/="[^"]*[<&](?!amp;|lt;|gt;|quot;|apos;|#\d+;)/) // no raw < or bare & inside an attribute value
     expect(text).toContain('name="Start &amp; &quot;quoted&quot; &lt;pier&gt;"')
     expect(text).toContain('legInfo="Pilot, then&#10;TSS"') // line end kept through attribute normalisation (XML 1.0 §3.3.3)
+  })
+
+  it('RTZ: every leg carries its speed, the plan\'s where it has none, and a calculated schedule the time at every waypoint', () => {
+    const route: RouteFileWaypoint[] = [
+      { name: '48°45′N 166°39′W', lat: 48.75, lon: -166.65, method: 'rhumb' },
+      { name: 'Unimak – “north”', lat: 54.5, lon: -165, method: 'geodesic' },
+      { name: 'Own speed', lat: 55, lon: -160, method: 'rhumb', speedKn: 11 },
+    ]
+    const times = ['2027-01-10T08:00:00.000Z', '2027-01-11T20:30:00.000Z', '2027-01-12T09:15:00.000Z']
+    const text = writeRouteRtz({ title: 'Hold 48°45′N', speedKn: 14.5, departureUtc: times[0], times }, route)
+    expect(text).toContain('<routeInfo routeName="Hold 48 45&apos;N"/>')
+    expect(text).toContain('name="48 45&apos;N 166 39&apos;W"')
+    expect(text).toContain('name="Unimak - &quot;north&quot;"')
+    expect(text).not.toMatch(/[°′″–“”]/)
+    expect(text.match(/speedMax="[^"]+"/g)).toEqual(['speedMax="14.5"', 'speedMax="11"'])
+    expect(text).toContain('<manual>\n        <scheduleElement waypointId="1" etd="2027-01-10T08:00:00Z"/>\n        <scheduleElement waypointId="3" speed="11"/>\n      </manual>')
+    expect(text).toContain([
+      '      <calculated>',
+      '        <scheduleElement waypointId="1" etd="2027-01-10T08:00:00Z"/>',
+      '        <scheduleElement waypointId="2" etd="2027-01-11T20:30:00Z" eta="2027-01-11T20:30:00Z" speed="14.5"/>',
+      '        <scheduleElement waypointId="3" eta="2027-01-12T09:15:00Z" speed="11"/>',
+      '      </calculated>',
+    ].join('\n'))
+    // Read back: every leg's speed, the departure from the schedule, the plan's speed as the common one.
+    const back = parseRouteFile('r.rtz', undefined, Buffer.from(text))
+    expect(back.waypoints.map(w => w.speedKn)).toEqual([undefined, 14.5, 11])
+    expect(back.departureUtc).toBe('2027-01-10T08:00:00.000Z')
   })
 
   it('GPX 1.1: root attributes the schema requires and escaped text', () => {

@@ -12,6 +12,11 @@ export interface RouteFileIssue { line?: number, element?: string, message: stri
 export interface ParsedRouteFile {
   format: RouteFileFormat
   routeName?: string
+  /** What the file says of the voyage besides its waypoints (RTZ routeInfo and schedules). */
+  vesselName?: string
+  departureUtc?: string
+  /** The speed most of its legs are planned at. */
+  speedKn?: number
   waypoints: Waypoint[]
   /** Problems that stop an import: nothing may be created while there is one. */
   errors: RouteFileIssue[]
@@ -24,6 +29,10 @@ export interface RouteFilePlan {
   title?: string | null
   vesselName?: string | null
   departureUtc?: string | Date | null
+  /** The plan's speed, for legs without one of their own. */
+  speedKn?: number | null
+  /** UTC time at each waypoint from the leg table: the departure at the first, the arrival at the others. */
+  times?: readonly string[]
 }
 
 export type RouteFileWaypoint = Pick<WaypointInput, 'name' | 'lat' | 'lon' | 'method' | 'speedKn' | 'xteNm' | 'turnRadiusNm' | 'notes'>

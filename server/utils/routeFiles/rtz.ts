@@ -37,6 +37,32 @@ function scheduleSpeeds(route: RouteXmlNode): Map<string, string> {
   return speeds
 }
 
+/** The departure time the schedules give the first waypoint (manual before calculated). */
+function scheduleDeparture(route: RouteXmlNode, firstId: string | undefined): string | undefined {
+  if (firstId === undefined) return undefined
+  for (const part of ['manual', 'calculated']) {
+    for (const schedule of routeXmlChildren(routeXmlChild(route, 'schedules'), 'schedule')) {
+      const container = routeXmlChild(schedule, part)
+      for (const element of [...routeXmlChildren(container, 'scheduleElement'), ...routeXmlChildren(container, 'sheduleElement')]) {
+        const etd = routeXmlAttr(element, 'etd')?.trim()
+        if (routeXmlAttr(element, 'waypointId')?.trim() !== firstId || !etd) continue
+        const ms = Date.parse(/(?:Z|[+-]\d\d:?\d\d)$/i.test(etd) ? etd : `${etd}Z`)
+        if (Number.isFinite(ms)) return new Date(ms).toISOString()
+      }
+    }
+  }
+  return undefined
+}
+
+/** The speed most legs are planned at (the earliest such on a tie), or undefined when no leg has one. */
+function commonSpeed(waypoints: readonly { speedKn?: number | null }[]): number | undefined {
+  const counts = new Map<number, number>()
+  for (const w of waypoints.slice(1)) if (w.speedKn != null) counts.set(w.speedKn, (counts.get(w.speedKn) ?? 0) + 1)
+  let best: number | undefined
+  for (const [speed, n] of counts) if (best === undefined || n > counts.get(best)!) best = speed
+  return best
+}
+
 function legAttr(leg: RouteXmlNode | undefined, fallback: RouteXmlNode | undefined, name: string) {
   return routeXmlAttr(leg, name) ?? routeXmlAttr(fallback, name)
 }
@@ -104,7 +130,9 @@ export function parseRouteRtz(text: string): ParsedRouteFile {
   const version = routeXmlAttr(route, 'version')
   if (version !== undefined && !['1.0', '1.1', '1.2'].includes(version.trim()))
     warnings.push({ line: doc.lineOf(route), message: `RTZ version ${version} is not one this reader knows (1.0, 1.1); read as 1.1` })
-  const routeName = routeXmlAttr(routeXmlChild(route, 'routeInfo'), 'routeName')?.trim() || undefined
+  const info = routeXmlChild(route, 'routeInfo')
+  const routeName = routeXmlAttr(info, 'routeName')?.trim() || undefined
+  const vesselName = routeXmlAttr(info, 'vesselName')?.trim() || undefined
   const list = routeXmlChild(route, 'waypoints')
   if (!list) throw new RouteFileError('no-route', 'the RTZ file has no waypoints element')
   const nodes = routeXmlChildren(list, 'waypoint')
@@ -122,12 +150,22 @@ export function parseRouteRtz(text: string): ParsedRouteFile {
     return raw
   })
   const { waypoints, errors } = validateRouteWaypoints(raws)
-  return { format: 'rtz', routeName, waypoints, errors, warnings }
+  const departureUtc = scheduleDeparture(route, nodes[0] ? routeXmlAttr(nodes[0], 'id')?.trim() : undefined)
+  return { format: 'rtz', routeName, vesselName, departureUtc, speedKn: commonSpeed(waypoints), waypoints, errors, warnings }
 }
 
 function attrs(pairs: [string, string | number | null | undefined][]): string {
   return pairs.filter(([, v]) => v !== undefined && v !== null && v !== '')
     .map(([k, v]) => ` ${k}="${typeof v === 'number' ? formatRouteQuantity(v) : escapeRouteXmlAttr(v!)}"`).join('')
+}
+
+/**
+ * Names as ECDIS route tables take them: degree, minute and second signs and typographic dashes and
+ * quotes written in ASCII (48°45′N → 48 45'N), which many of them cannot show.
+ */
+export function rtzRouteName(text: string | null | undefined): string {
+  return (text ?? '').replace(/°/g, ' ').replace(/[′’‘`´]/g, '\'').replace(/[″“”]/g, '"').replace(/[‐‑‒–—―−]/g, '-')
+    .replace(/ {2,}/g, ' ').trim()
 }
 
 function departureText(value: RouteFilePlan['departureUtc']): string | undefined {
@@ -138,23 +176,26 @@ function departureText(value: RouteFilePlan['departureUtc']): string | undefined
 
 /**
  * Writes RTZ 1.1. Each waypoint after the first carries the leg arriving at it: Orthodrome for a
- * geodesic leg, Loxodrome for a rhumb line, the cross-track limit on both sides, the planned speed
- * as speedMax and again in a manual schedule (with the departure time at the first waypoint).
+ * geodesic leg, Loxodrome for a rhumb line, the cross-track limit on both sides, and its speed (its
+ * own, else the plan's) as speedMax. The manual schedule holds the departure time and the speeds
+ * the planner set on single legs; the calculated one the time at every waypoint (etd leaving, eta
+ * arriving) and every leg's speed, from the leg table.
  */
 export function writeRouteRtz(plan: RouteFilePlan, waypoints: readonly RouteFileWaypoint[]): string {
   const lines = [
     '<?xml version="1.0" encoding="UTF-8"?>',
     `<route xmlns="${RTZ_ROUTE_NAMESPACE}" version="1.1">`,
-    `  <routeInfo${attrs([['routeName', plan.title?.trim() || 'Route'], ['vesselName', plan.vesselName]])}/>`,
+    `  <routeInfo${attrs([['routeName', rtzRouteName(plan.title) || 'Route'], ['vesselName', plan.vesselName]])}/>`,
     '  <waypoints>',
   ]
+  const legSpeed = (w: RouteFileWaypoint, i: number) => (i === 0 ? undefined : w.speedKn ?? plan.speedKn ?? undefined)
   waypoints.forEach((w, i) => {
-    lines.push(`    <waypoint${attrs([['id', String(i + 1)], ['name', w.name], ['radius', w.turnRadiusNm]])}>`)
+    lines.push(`    <waypoint${attrs([['id', String(i + 1)], ['name', w.name == null ? w.name : rtzRouteName(w.name)], ['radius', w.turnRadiusNm]])}>`)
     lines.push(`      <position lat="${formatRouteDecimal(w.lat)}" lon="${formatRouteDecimal(normaliseRouteLongitude(w.lon))}"/>`)
     const leg = attrs([
       ['starboardXTD', w.xteNm], ['portsideXTD', w.xteNm],
       ['geometryType', i === 0 && !w.method ? undefined : w.method === 'geodesic' ? 'Orthodrome' : 'Loxodrome'],
-      ['speedMax', w.speedKn], ['legInfo', w.notes],
+      ['speedMax', legSpeed(w, i)], ['legInfo', w.notes],
     ])
     if (leg) lines.push(`      <leg${leg}/>`)
     lines.push('    </waypoint>')
@@ -166,8 +207,16 @@ export function writeRouteRtz(plan: RouteFilePlan, waypoints: readonly RouteFile
     const etd = i === 0 ? departure : undefined
     return w.speedKn != null || etd ? [`        <scheduleElement${attrs([['waypointId', String(i + 1)], ['etd', etd], ['speed', w.speedKn]])}/>`] : []
   })
-  if (schedule.length > 0)
-    lines.push('  <schedules>', '    <schedule id="1" name="Plan">', '      <manual>', ...schedule, '      </manual>', '    </schedule>', '  </schedules>')
+  const times = plan.times?.length === waypoints.length ? plan.times : null
+  const calculated = times
+    ? waypoints.map((w, i) => `        <scheduleElement${attrs([['waypointId', String(i + 1)], ['etd', i < waypoints.length - 1 ? departureText(times[i]) : undefined], ['eta', i > 0 ? departureText(times[i]) : undefined], ['speed', legSpeed(w, i)]])}/>`)
+    : []
+  if (schedule.length > 0 || calculated.length > 0) {
+    lines.push('  <schedules>', '    <schedule id="1" name="Plan">')
+    if (schedule.length > 0) lines.push('      <manual>', ...schedule, '      </manual>')
+    if (calculated.length > 0) lines.push('      <calculated>', ...calculated, '      </calculated>')
+    lines.push('    </schedule>', '  </schedules>')
+  }
   lines.push('</route>', '')
   return lines.join('\n')
 }
