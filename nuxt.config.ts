@@ -24,7 +24,8 @@ export default defineNuxtConfig({
   runtimeConfig: {
     databaseUrl: '',
     smtpUrl: 'smtp://127.0.0.1:2525',
-    mailFrom: 'Passagewright <passages@kestrel-bight.example>',
+    // The installation's sender, for companies that have not set their own (company settings, mailFrom).
+    mailFrom: 'Passagewright <passages@passagewright.example>',
     tileCacheDir: '',
     outboxWorker: 'on',
     tableWorker: 'on',

@@ -100,6 +100,23 @@ ${banner}
 </body></html>`
 }
 
+/** A brief may be sent again (a correction, a crew change), but not without end: so many per plan per hour, counted for all instances. */
+export const BRIEFS_PER_PLAN_PER_HOUR = 3
+
+async function countBrief(planId: number) {
+  try {
+    await rateLimiter('crew-brief-plan', BRIEFS_PER_PLAN_PER_HOUR, 3600).consume(limitKey(planId))
+  }
+  catch (error) {
+    if (!isLimitReached(error)) throw error
+    const minutes = Math.max(1, Math.ceil(error.msBeforeNext / 60_000))
+    throw createError({
+      statusCode: 429, statusMessage: `This plan's crew brief was queued ${BRIEFS_PER_PLAN_PER_HOUR} times within the hour; it can be sent again in ${minutes} minute${minutes === 1 ? '' : 's'}`,
+      data: { retryAfterS: Math.ceil(error.msBeforeNext / 1000) },
+    })
+  }
+}
+
 /** Composes the brief from the plan as it is now and puts it in the outbox for the vessel's crew list. */
 export async function queueCrewBrief(user: SessionUser, planId: number) {
   const view = await getPlanView(user, planId)
@@ -108,7 +125,9 @@ export async function queueCrewBrief(user: SessionUser, planId: number) {
   const recipients = await db('crew_members').where({ vessel_id: view.plan.vesselId }).orderBy('id').select('name', 'email')
   if (!recipients.length)
     throw createError({ statusCode: 409, statusMessage: `The crew list of ${vessel.name} is empty; add crew members before sending a brief` })
+  await countBrief(planId)
   const brief = composeCrewBrief(view, vessel)
-  const queued = await addToOutbox({ companyId: user.companyId, planId, queuedBy: user.id, recipients, ...brief })
+  const mailFrom = (await getCompanySettings(user.companyId)).mailFrom ?? useRuntimeConfig().mailFrom
+  const queued = await addToOutbox({ companyId: user.companyId, planId, queuedBy: user.id, recipients, mailFrom, ...brief })
   return { ...queued, recipientCount: recipients.length, subject: brief.subject }
 }

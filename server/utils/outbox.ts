@@ -55,22 +55,23 @@ export async function enqueueOutboxMessage(id: number) {
   await boss.send(OUTBOX_QUEUE, { outboxId: id }, { singletonKey: String(id), ...RETRY, expireInSeconds: 300 })
 }
 
-export interface NewOutboxMessage { companyId: number, planId: number, queuedBy: number, recipients: OutboxRecipient[], subject: string, text: string, html: string }
+/** `mailFrom`: the company's own sender (its settings), else the installation's NUXT_MAIL_FROM. */
+export interface NewOutboxMessage { companyId: number, planId: number, queuedBy: number, recipients: OutboxRecipient[], subject: string, text: string, html: string, mailFrom: string }
 
 /** Commits the message as a queued row with its Message-ID fixed up front, then enqueues it. */
 export async function addToOutbox(message: NewOutboxMessage) {
   const [row] = await useDb()('outbox_messages').insert({
     company_id: message.companyId, plan_id: message.planId, queued_by: message.queuedBy, kind: 'crew_brief',
     recipients: JSON.stringify(message.recipients), subject: message.subject, body_text: message.text, body_html: message.html,
-    state: 'queued', message_id: newMessageId(),
+    state: 'queued', message_id: newMessageId(message.mailFrom), mail_from: message.mailFrom,
   }).returning(['id', 'message_id', 'state'])
   // The row is already safe; a lost enqueue is made good by the sweep.
   await enqueueOutboxMessage(row.id).catch(error => console.error(`[outbox] enqueue of message ${row.id} failed; the sweep will retry:`, error.message))
   return { id: row.id as number, messageId: row.message_id as string, state: row.state as string }
 }
 
-function newMessageId() {
-  const domain = /@([^>\s]+)/.exec(useRuntimeConfig().mailFrom)?.[1] ?? 'passagewright.invalid'
+function newMessageId(mailFrom: string) {
+  const domain = /@([^>\s]+)/.exec(mailFrom)?.[1] ?? 'passagewright.invalid'
   return `<brief.${randomUUID()}@${domain}>`
 }
 
@@ -91,7 +92,7 @@ export async function deliverOutboxMessage(id: number): Promise<'sent' | 'skippe
   if (!row) return 'skipped'
   try {
     await smtp().sendMail({
-      from: useRuntimeConfig().mailFrom,
+      from: row.mail_from ?? useRuntimeConfig().mailFrom,
       to: (row.recipients as OutboxRecipient[]).map(r => ({ name: r.name, address: r.email })),
       subject: row.subject, text: row.body_text, html: row.body_html, messageId: row.message_id,
       headers: { 'X-Passagewright-Outbox-Id': String(row.id), 'X-Passagewright-Plan-Id': String(row.plan_id ?? '') },

@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { fuelReserveSchema } from './fuel'
+import { emailSchema } from './fields'
 
 /** A bunker price: a fuel grade's name as the vessels' fuel data names it, and its price per tonne. */
 export const fuelPriceSchema = z.object({
@@ -8,11 +9,31 @@ export const fuelPriceSchema = z.object({
 })
 export type FuelPriceInput = z.infer<typeof fuelPriceSchema>
 
+const SENDER = /^(?:([^<>",;\\\u0000-\u001f\u007f]{1,100}?)\s*)?<([^<>\s]+)>$/
+const mailFromText = 'must be an e-mail address, optionally with a name: Kestrel Bight Shipping <passages@kestrel-bight.example>'
+
+/**
+ * The sender of the company's crew briefs: an address, optionally after a name. Normalised to
+ * `Name <address>`; no line breaks, quotes or commas, so it cannot add a header or a second address.
+ */
+export const mailFromSchema = z.string({ error: mailFromText }).trim().max(320, 'must be at most 320 characters').transform((text, ctx) => {
+  const named = SENDER.exec(text)
+  const address = emailSchema.safeParse(named ? named[2] : text)
+  if (!address.success || (!named && /[<>\s]/.test(text))) {
+    ctx.addIssue({ code: 'custom', message: mailFromText })
+    return z.NEVER
+  }
+  const name = named?.[1]?.trim()
+  return name ? `${name} <${address.data}>` : address.data
+})
+
 /** Company settings (admin): the fuel reserve margin, the helm delay used for wheel-over, bunker prices. */
 export const companySettingsSchema = z.object({
   reserve: fuelReserveSchema,
   fuelPrices: z.array(fuelPriceSchema).max(12, 'at most 12 fuel prices').optional(),
   currency: z.string({ error: 'currency must be text' }).regex(/^[A-Z]{3}$/, 'currency is a three-letter code (ISO 4217), e.g. USD').optional(),
   helmDelayS: z.number({ error: 'helmDelayS must be a number' }).finite().min(0, 'helmDelayS must not be negative').max(120, 'helmDelayS is at most 120'),
+  /** Crew briefs go out from this address; without it, from the installation's NUXT_MAIL_FROM. */
+  mailFrom: mailFromSchema.nullable().optional(),
 })
 export type CompanySettings = z.infer<typeof companySettingsSchema>

@@ -69,6 +69,9 @@ export const placeSchema = z.object({
 export type PlaceInput = z.input<typeof placeSchema>
 export type Place = z.output<typeof placeSchema>
 
+/** Places one CSV may bring, as route files are capped at 5,000 waypoints: the preview lists every row, so its size stays bounded. */
+export const MAX_PLACE_IMPORT_ROWS = 5000
+
 export const placeImportModeSchema = z.object({
   mode: z.enum(['preview', 'commit'], { error: 'mode must be "preview" or "commit"' }),
 })

@@ -1,11 +1,13 @@
 // Two app instances on different ports, one database, one session password: sessions made on one
 // work on the other, a plan goes through sign-off alternating between them, and with both outbox
-// workers running each crew brief is delivered exactly once.
+// workers running each crew brief is delivered exactly once; failed sign-ins are counted once for both.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { demoUsers, DEMO_PASSWORD, type DemoUser } from '../support/server'
 import { startInstance, type Instance } from '../support/instances'
 import { mailsFor } from '../support/mail'
 import { waitForOutboxSettled } from '../support/outbox'
+import { addCompanyUser } from '../support/database'
+import { postJsonFrom } from '../support/fromAddress'
 
 let a: Instance, b: Instance
 beforeAll(async () => {
@@ -58,5 +60,22 @@ describe('two instances behind one database', () => {
     expect(delivered()).toHaveLength(1)
     const outbox = (await call(b.url, planner, '/api/outbox')).body as any[]
     expect(outbox.find(m => m.id === outboxId)?.state).toBe('sent')
+  })
+
+  it('counts failed sign-ins for both instances together: alternating between them, the 11th attempt is refused', async () => {
+    const email = 'throttle.scaleout@kestrel-bight.example'
+    await addCompanyUser('Kestrel Bight Shipping', 'planner', email)
+    // From a client address of this test's own, so 127.0.0.1's count stays as other files left it.
+    const attempt = (base: string, password: string) => postJsonFrom('127.0.0.12', `${base}/api/auth/login`, { email, password })
+    const delays: number[] = []
+    for (let i = 0; i < 10; i++) {
+      const res = await attempt(i % 2 ? b.url : a.url, `wrong-${i}`)
+      expect(res.status).toBe(401)
+      delays.push(Number(res.headers['x-signin-delay-ms'] ?? 0))
+    }
+    // Counted per instance, each would have seen five failures: no delay at all, and no refusal.
+    expect(delays).toEqual([0, 0, 0, 0, 0, 200, 400, 800, 1600, 2000])
+    expect((await attempt(b.url, DEMO_PASSWORD)).status).toBe(429)
+    expect((await attempt(a.url, DEMO_PASSWORD)).status).toBe(429)
   })
 })

@@ -2,7 +2,7 @@
 import { existsSync, readdirSync, readFileSync } from 'node:fs'
 import { join } from 'node:path'
 
-export interface Mail { envelopeTo: string[], subject: string, text: string, html: string | null, messageId: string, headers: Record<string, string> }
+export interface Mail { envelopeTo: string[], from: string, subject: string, text: string, html: string | null, messageId: string, headers: Record<string, string> }
 
 /** The messages in `dir` sent for one outbox row (matched by its X-Passagewright-Outbox-Id header). */
 export function mailsFor(dir: string, outboxId: number): Mail[] {

@@ -7,11 +7,9 @@ export default defineEventHandler(async (event) => {
   await assertLoginAllowed(event, email)
   const row = await findUserForLogin(email)
   const ok = row ? await verifyPassword(row.password_hash, password) : await verifyPassword(DUMMY_HASH, password).then(() => false)
-  if (!row || !ok) {
-    recordLoginFailure(event, email)
-    throw createError({ statusCode: 401, statusMessage: GENERIC })
-  }
-  recordLoginSuccess(event, email)
+  // The attempt was counted by assertLoginAllowed; a failure keeps the count.
+  if (!row || !ok) throw createError({ statusCode: 401, statusMessage: GENERIC })
+  await recordLoginSuccess(event, email)
   const user = toSessionUser(row)
   await replaceUserSession(event, { user, loggedInAt: Date.now() })
   return { user }
