@@ -10,7 +10,7 @@ import { reverseRows } from '#shared/utils/waypointRows'
 export async function copyPlan(user: SessionUser, id: number, input: PlanCopyInput) {
   const source = await findPlan(user, id)
   const waypoints = await loadWaypoints(id)
-  const reversed = input.reversed === true
+  const reversed = input.reversed
   const title = input.title ?? `${source.title} (${reversed ? 'return' : 'copy'})`.slice(0, 160)
   const departureUtc = input.departureUtc ?? (reversed && source.arrivalUtc ? source.arrivalUtc : source.departureUtc)
   return createPlan(user, {

@@ -34,12 +34,15 @@ export const planCreateSchema = z.object({
 })
 export type PlanCreateInput = z.infer<typeof planCreateSchema>
 
-/** A new draft from an earlier plan: the same track, or reversed for the return passage. */
+/**
+ * A new draft from an earlier plan: the same track (`reversed: false`), or reversed for the return
+ * passage. `reversed` is required and unknown fields are refused, so a malformed body never creates a plan.
+ */
 export const planCopySchema = z.object({
-  reversed: z.boolean({ error: 'reversed must be true or false' }).optional(),
+  reversed: z.boolean({ error: 'reversed must be true or false' }),
   title: planCreateSchema.shape.title.optional(),
   departureUtc: dateTimeUtcSchema.optional(),
-})
+}).strict()
 export type PlanCopyInput = z.infer<typeof planCopySchema>
 
 export const waypointsPutSchema = z.object({

@@ -33,7 +33,7 @@ describe('copying a plan', () => {
   })
 
   it('copies the track and header as a new draft of the same vessel, naming where it came from', async () => {
-    const { id } = await expectStatus<{ id: number }>(planner.request(`/api/plans/${sourceId}/copy`, { method: 'POST' }), 201)
+    const { id } = await expectStatus<{ id: number }>(planner.request(`/api/plans/${sourceId}/copy`, { method: 'POST', body: { reversed: false } }), 201)
     expect(id).not.toBe(sourceId)
     const copy = await expectStatus<View>(planner.request(`/api/plans/${id}`), 200)
     expect(copy.plan).toMatchObject({ status: 'draft', version: 1, title: 'Maas – German Bight (copy)', vesselId: source.plan.vesselId, departureUtc: source.plan.departureUtc, speedKn: 12, departurePlaceId: source.plan.departurePlaceId, arrivalPlaceId: source.plan.arrivalPlaceId })
@@ -63,20 +63,24 @@ describe('copying a plan', () => {
   it('takes a title and departure time of its own, and copies an approved plan too', async () => {
     const master = await loginAs('master')
     const approved = await makePlan('approved', { planner, master })
-    const { id } = await expectStatus<{ id: number }>(planner.request(`/api/plans/${approved}/copy`, { method: 'POST', body: { title: 'Second voyage', departureUtc: '2027-05-02T10:00:00Z' } }), 201)
+    const { id } = await expectStatus<{ id: number }>(planner.request(`/api/plans/${approved}/copy`, { method: 'POST', body: { reversed: false, title: 'Second voyage', departureUtc: '2027-05-02T10:00:00Z' } }), 201)
     const copy = await expectStatus<View>(planner.request(`/api/plans/${id}`), 200)
     expect(copy.plan).toMatchObject({ title: 'Second voyage', departureUtc: '2027-05-02T10:00:00.000Z', status: 'draft' })
   })
 
   it('refuses bad input naming the field, and plans of another company or none as not found', async () => {
-    for (const [body, field] of [[{ reversed: 'yes' }, 'reversed'], [{ title: 'ab' }, 'title'], [{ departureUtc: '9999-01-01T00:00:00Z' }, 'departureUtc']] as const) {
+    const bad = [[{ reversed: 'yes' }, 'reversed'], [{}, 'reversed'], [{ reversed: true, title: 'ab' }, 'title'],
+      [{ reversed: true, departureUtc: '9999-01-01T00:00:00Z' }, 'departureUtc'], [{ reversed: true, vesselId: 1 }, 'vesselId']] as const
+    for (const [body, field] of bad) {
       const res = await planner.request(`/api/plans/${sourceId}/copy`, { method: 'POST', body })
       expect(res.status, JSON.stringify(body)).toBe(400)
       expect(res.body.message).toContain(field)
     }
     const other = await loginAs('otherPlanner')
-    expect((await other.request(`/api/plans/${sourceId}/copy`, { method: 'POST' })).status).toBe(404)
-    expect((await planner.request('/api/plans/2147483647/copy', { method: 'POST' })).status).toBe(404)
-    expect((await (await loginAs('shore')).request(`/api/plans/${sourceId}/copy`, { method: 'POST' })).status).toBe(403)
+    expect((await planner.request(`/api/plans/${sourceId}/copy`, { method: 'POST' })).status).toBe(400)
+    const body = { reversed: true }
+    expect((await other.request(`/api/plans/${sourceId}/copy`, { method: 'POST', body })).status).toBe(404)
+    expect((await planner.request('/api/plans/2147483647/copy', { method: 'POST', body })).status).toBe(404)
+    expect((await (await loginAs('shore')).request(`/api/plans/${sourceId}/copy`, { method: 'POST', body })).status).toBe(403)
   })
 })
