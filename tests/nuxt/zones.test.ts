@@ -63,7 +63,7 @@ describe('zones API', () => {
 describe('zones in the plan', () => {
   it('the demo Rotterdam → New York plan carries ECA distance per leg, totals by zone and kind, and fuel by grade', async () => {
     const plans = (await planner.request('/api/plans')).body as any[]
-    const id = plans.find(p => p.title.startsWith('Rotterdam'))!.id
+    const id = plans.find(p => p.title === 'Rotterdam – New York, North Atlantic')!.id
     const { body } = await planner.request(`/api/plans/${id}`)
     expect(body.legs[0].zones).toEqual([{ zoneId: expect.any(Number), name: 'North Sea ECA (incl. English Channel)', kind: 'eca', distanceNm: body.legs[0].distanceNm }])
     expect(body.legs[3].zones).toEqual([])
