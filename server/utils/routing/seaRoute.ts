@@ -21,9 +21,7 @@ import { smoothPath } from './smooth'
 import type { PathPoint } from './smooth'
 import { rasterLowerBoundNm } from './visibility'
 
-
 export class NoRouteError extends Error {}
-export { EndError }
 
 export interface RouteQuery {
   clearanceNm: number
@@ -99,8 +97,10 @@ function minClearance(g: SeaGraph, pts: RouteWaypoint[], capNm: number): number 
 }
 
 function viaOf(pts: RouteWaypoint[]): { id: string, name: string }[] {
-  const used = new Set<number>()
-  for (const w of pts) if (w.passageId) used.add(PASSAGES.findIndex(p => p.id === w.passageId))
+  // Where along the route (leg index + fraction) each passage is first met: its first fairway waypoint, or its gate crossed.
+  const metAt = new Map<number, number>()
+  const meet = (pi: number, at: number) => { if (!(metAt.get(pi)! <= at)) metAt.set(pi, at) }
+  pts.forEach((w, i) => { if (w.passageId) meet(PASSAGES.findIndex(p => p.id === w.passageId), i) })
   for (let i = 0; i + 1 < pts.length; i++) {
     const a = pts[i]!, b = pts[i + 1]!
     const line = geod.InverseLine(a.lat, a.lon, b.lat, b.lon, G.LATITUDE | G.LONGITUDE | G.DISTANCE_IN)
@@ -108,16 +108,12 @@ function viaOf(pts: RouteWaypoint[]): { id: string, name: string }[] {
     let prev = { lat: a.lat, lon: a.lon }
     for (let k = 1; k <= n; k++) {
       const p = k === n ? { lat: b.lat, lon: b.lon } : (({ lat2, lon2 }) => ({ lat: lat2!, lon: lon2! }))(line.Position((line.s13 * k) / n, G.LATITUDE | G.LONGITUDE))
-      PASSAGES.forEach((_, pi) => { if (!used.has(pi) && gateCrossed(pi, prev.lat, prev.lon, p.lat, p.lon)) used.add(pi) })
+      PASSAGES.forEach((_, pi) => { if (gateCrossed(pi, prev.lat, prev.lon, p.lat, p.lon)) meet(pi, i + (k - 0.5) / n) })
       prev = p
     }
   }
   // In the order the route meets them.
-  const order = (pi: number) => {
-    const i = pts.findIndex(w => w.passageId === PASSAGES[pi]!.id)
-    return i >= 0 ? i : 0
-  }
-  return [...used].sort((x, y) => order(x) - order(y)).map(pi => ({ id: PASSAGES[pi]!.id, name: PASSAGES[pi]!.name }))
+  return [...metAt.entries()].sort((x, y) => x[1] - y[1]).map(([pi]) => ({ id: PASSAGES[pi]!.id, name: PASSAGES[pi]!.name }))
 }
 
 /** The waypoints of a route through the graph path between two placed ends. */

@@ -3,7 +3,8 @@
 import type { PassageSummary, SeaRouteInput, SeaRouteOptions, SeaRouteResult } from '#shared/types/routing'
 import { PASSAGES } from '#shared/utils/routing/passages'
 import { useSeaGraph } from './graphStore'
-import { EndError, NoRouteError, seaRoute } from './seaRoute'
+import { EndError } from './ends'
+import { NoRouteError, seaRoute } from './seaRoute'
 
 export function listPassages(): PassageSummary[] {
   return PASSAGES.map(p => ({ id: p.id, name: p.name, kind: p.kind, ...(p.transitNm ? { transitNm: p.transitNm } : {}) }))
