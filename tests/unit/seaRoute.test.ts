@@ -71,6 +71,18 @@ describe('route ends', () => {
     expect(landPoints(r)).toEqual([])
   })
 
+  it('moves an end in water the coarse coastline closes off onto the open sea nearby, and says by how much', () => {
+    // A bay of Pag island off the Croatian coast (from memory): afloat on the 1:10m coastline, but in water it closes off.
+    const closedIn = { lat: 44.485, lon: 15.107 }
+    expect(isRoutingLand(land, closedIn.lat, closedIn.lon)).toBe(false)
+    const r = seaRoute(graph, closedIn, { lat: 44.0, lon: 14.0 })
+    expect(r.moved.from).toBeGreaterThan(1)
+    expect(r.moved.from).toBeLessThanOrEqual(20)
+    expect(Math.abs(geodesicNm(closedIn, r.waypoints[0]!) - r.moved.from!)).toBeLessThan(0.05)
+    expect(r.moved.to).toBeUndefined()
+    expect(landPoints(r)).toEqual([])
+  })
+
   it('refuses a position more than 20 nm from navigable water, naming the end', () => {
     // Seville lies some 30 nm up the Guadalquivir from the sea at Sanlúcar (from memory).
     expect(() => seaRoute(graph, { lat: 37.38, lon: -5.99 }, { lat: 36, lon: -8 })).toThrow(EndError)

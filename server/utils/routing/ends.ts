@@ -10,6 +10,9 @@ import type { Seed } from './search'
 import type { SeaGraph } from './seaGraph'
 import { legClear } from './visibility'
 
+/** Landmark distance stored for nodes a landmark does not reach (seaGraph.ts). */
+export const UNREACHED_NM = 1e7
+
 export interface RouteEnd { lat: number, lon: number, movedNm: number, clearNm: number }
 
 export class EndError extends Error {
@@ -77,9 +80,9 @@ export function joinEnd(g: SeaGraph, end: RouteEnd, clearanceNm: number, limitLa
  * An end placed in water no graph node can see from it (a lagoon the coarse coastline closes):
  * moved onto the nearest graph node within MAX_END_MOVE_NM of the position asked for, if any.
  */
-export function endOnNearestNode(g: SeaGraph, field: 'from' | 'to', lat: number, lon: number, limitLat: number): { end: RouteEnd, seeds: Seed[] } {
+export function endOnNearestNode(g: SeaGraph, field: 'from' | 'to', lat: number, lon: number, limitLat: number, usable: (v: number) => boolean = () => true): { end: RouteEnd, seeds: Seed[] } {
   const near = nodesWithin(g.index, lat, lon, MAX_END_MOVE_NM)
-    .filter(v => Math.abs(g.lat[v]!) <= limitLat && !g.nodePassage[v])
+    .filter(v => Math.abs(g.lat[v]!) <= limitLat && !g.nodePassage[v] && usable(v))
     .map(v => ({ v, nm: localNm(lat, lon, g.lat[v]!, g.lon[v]!) }))
     .filter(c => c.nm <= MAX_END_MOVE_NM).sort((a, b) => a.nm - b.nm)
   const best = near[0]
@@ -93,4 +96,23 @@ export function joinedEnd(g: SeaGraph, field: 'from' | 'to', lat: number, lon: n
   const end = placeEnd(g, field, lat, lon)
   const seeds = joinEnd(g, end, clearanceNm, limitLat)
   return seeds.length ? { end, seeds } : endOnNearestNode(g, field, lat, lon, limitLat)
+}
+
+/** Whether a node belongs to the graph's main body of water (the one its landmarks lie in), not a lagoon or lake the coastline closes. */
+export function onMainWater(g: SeaGraph, v: number): boolean {
+  const L = g.landmarks.length
+  return L === 0 || g.landmarkNm[v * L]! < UNREACHED_NM
+}
+
+/**
+ * An end joined only to water the coastline closes off (a sound whose mouth the coarse coastline
+ * shuts): moved onto the nearest node of the main body of water within MAX_END_MOVE_NM, if any.
+ */
+export function rejoinedOnMainWater(g: SeaGraph, field: 'from' | 'to', lat: number, lon: number, joined: { end: RouteEnd, seeds: Seed[] }, limitLat: number): { end: RouteEnd, seeds: Seed[] } | null {
+  if (joined.seeds.some(s => onMainWater(g, s.node))) return null
+  try { return endOnNearestNode(g, field, lat, lon, limitLat, v => onMainWater(g, v)) }
+  catch (e) {
+    if (e instanceof EndError) return null
+    throw e
+  }
 }

@@ -5,7 +5,8 @@ import Flatbush from 'flatbush'
 import { G, geod } from '#shared/utils/engine/wgs84'
 import { normaliseLongitude } from '#shared/utils/position'
 import type { LandData } from '../land'
-import { NM_PER_DEG_LAT, chordCrossesLand, coastDistanceNm, isRoutingLand } from './coast'
+import { NM_PER_DEG_LAT, coastDistanceNm, isRoutingLand } from './coast'
+import { chordClearExact } from './visibility'
 import { fieldNm } from './distanceField'
 import type { DistanceField } from './distanceField'
 
@@ -117,16 +118,25 @@ function chordClearance(f: DistanceField, lat1: number, lon1: number, c1: number
   return low
 }
 
-/** Whether the chord between two nodes crosses land; long chords are split along the great circle first. */
+/** Margin (nm) every graph chord keeps from the coastline beyond the chord's bow against the geodesic sailed along it. */
+const CHORD_MARGIN_NM = 0.02
+
+/**
+ * Whether the chord between two nodes crosses land or comes closer to the coastline than the
+ * geodesic between its ends may stray from it (sagitta L²·tan φ / 8R, plus a small margin), so a
+ * leg sailed on the geodesic is clear wherever the chord is; long chords are split along the way first.
+ */
 function segmentCrossesLand(d: LandData, lat1: number, lon1: number, lat2: number, lon2: number, lengthNm: number): boolean {
   const pieces = Math.max(1, Math.ceil(lengthNm / 20))
+  const pieceNm = lengthNm / pieces
   let ax = lon1, ay = lat1
   for (let i = 1; i <= pieces; i++) {
     const t = i / pieces
     // Linear in lon/lat is within a few metres of the geodesic over 20 nm below 84°.
     const by = lat1 + t * (lat2 - lat1)
     const bx = ax + normaliseLongitude(lon1 + t * normaliseLongitude(lon2 - lon1) - ax)
-    if (chordCrossesLand(d, ax, ay, bx, by)) return true
+    const tanLat = Math.tan(Math.min(85, Math.max(Math.abs(ay), Math.abs(by))) * RAD)
+    if (!chordClearExact(d, ax, ay, bx, by, (pieceNm * pieceNm * tanLat) / (8 * 3440) + CHORD_MARGIN_NM)) return true
     ax = normaliseLongitude(bx); ay = by
   }
   return false

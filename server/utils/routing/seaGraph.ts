@@ -4,17 +4,19 @@
 // graph theory", SODA 2005) and the clearance raster for line-of-sight tests.
 import type Flatbush from 'flatbush'
 import { G, geod } from '#shared/utils/engine/wgs84'
+import { normaliseLongitude } from '#shared/utils/position'
 import { PASSAGES } from '#shared/utils/routing/passages'
 import type { LandData } from '../land'
 import { coastDistanceNm, isRoutingLand } from './coast'
 import { buildDistanceField } from './distanceField'
 import {
-  DEFAULT_GRAPH_PARAMS, buildGridEdges, buildGridNodes, localNm, nodeIndex, nodesWithin, packEdges, segmentCrossesLand,
+  DEFAULT_GRAPH_PARAMS, buildGridEdges, buildGridNodes, edgeLengthNm, localNm, nodeIndex, nodesWithin, packEdges, segmentCrossesLand,
 } from './graphBuild'
 import type { Csr, EdgeList, GraphParams, GridNodes } from './graphBuild'
 import { buildClearanceRaster } from './visibility'
 import type { ClearanceRaster, Sight } from './visibility'
 import { dijkstraLengths } from './search'
+import { UNREACHED_NM } from './ends'
 
 export interface SeaGraph extends Csr {
   nodeCount: number
@@ -77,6 +79,68 @@ function addFairways(land: LandData, nodes: GridNodes, edges: EdgeList, passageO
   })
 }
 
+/** How far (in its own cell sizes, and at most nm) a node of a small component looks for a node of another one to bridge to. */
+const BRIDGE_CELLS = 4
+const BRIDGE_MAX_NM = 12
+const BRIDGE_TESTS = 12
+
+function root(parent: Int32Array, u: number): number {
+  while (parent[u] !== u) { parent[u] = parent[parent[u]!]!; u = parent[u]! }
+  return u
+}
+
+/** Lowest distance to the coastline along a short chord, sampled every quarter nm (nm). */
+function chordCoastNm(land: LandData, lat1: number, lon1: number, lat2: number, lon2: number, lengthNm: number): number {
+  const n = Math.max(1, Math.ceil(lengthNm * 4))
+  const dLon = normaliseLongitude(lon2 - lon1)
+  let low = Infinity, hint = -1
+  for (let k = 0; k <= n; k++) {
+    const c = coastDistanceNm(land, lat1 + ((lat2 - lat1) * k) / n, normaliseLongitude(lon1 + (dLon * k) / n), 50, hint)
+    hint = c.edge
+    if (c.nm < low) low = c.nm
+  }
+  return low
+}
+
+/**
+ * Water the quadtree leaves in pieces: a fjord, sound or channel whose mouth is narrower than the
+ * cells around it gets no node in the mouth, so its nodes form a component of their own although
+ * the coastline leaves it open. Each grid node outside the largest component is joined to the
+ * nearest node of another component it sees with a chord clear of land, if one lies near enough.
+ * Water the coastline closes (a lagoon, a lake) stays apart: no clear chord leads out of it.
+ */
+function bridgeComponents(land: LandData, nodes: GridNodes, edges: EdgeList, gridCount: number): number {
+  const n = nodes.lat.length
+  const parent = Int32Array.from({ length: n }, (_, i) => i)
+  for (let k = 0; k < edges.from.length; k++) {
+    const a = root(parent, edges.from[k]!), b = root(parent, edges.to[k]!)
+    if (a !== b) parent[a] = b
+  }
+  const comp = Int32Array.from({ length: n }, (_, i) => root(parent, i))
+  const size = new Map<number, number>()
+  for (let i = 0; i < n; i++) size.set(comp[i]!, (size.get(comp[i]!) ?? 0) + 1)
+  let main = -1, mainSize = 0
+  for (const [c, s] of size) if (s > mainSize) { main = c; mainSize = s }
+  const index = nodeIndex(nodes.lat, nodes.lon, gridCount)
+  let added = 0
+  for (let u = 0; u < gridCount; u++) {
+    if (comp[u] === main) continue
+    const la = nodes.lat[u]!, lo = nodes.lon[u]!
+    const reach = Math.min(BRIDGE_MAX_NM, BRIDGE_CELLS * nodes.size[u]!)
+    const near = nodesWithin(index, la, lo, reach).filter(v => v < gridCount && comp[v] !== comp[u])
+      .map(v => ({ v, nm: localNm(la, lo, nodes.lat[v]!, nodes.lon[v]!) })).filter(c => c.nm <= reach).sort((a, b) => a.nm - b.nm)
+    for (const { v, nm } of near.slice(0, BRIDGE_TESTS)) {
+      const lb = nodes.lat[v]!, lob = nodes.lon[v]!
+      if (segmentCrossesLand(land, la, lo, lb, lob, nm)) continue
+      edges.from.push(u); edges.to.push(v); edges.passage.push(0); edges.lengthNm.push(edgeLengthNm(la, lo, lb, lob))
+      edges.clearNm.push(Math.min(nodes.clear[u]!, nodes.clear[v]!, chordCoastNm(land, la, lo, lb, lob, nm)))
+      added++
+      break
+    }
+  }
+  return added
+}
+
 function segmentsCross(a: number[], b: number[], c: number[], d: number[]): boolean {
   const o = (p: number[], q: number[], r: number[]) => (q[0]! - p[0]!) * (r[1]! - p[1]!) - (q[1]! - p[1]!) * (r[0]! - p[0]!)
   return (o(a, b, c) > 0) !== (o(a, b, d) > 0) && (o(c, d, a) > 0) !== (o(c, d, b) > 0)
@@ -117,7 +181,7 @@ function landmarks(g: Csr & { lat: Float64Array }, n: number): { landmarks: Uint
     let far = 0, farNm = -1
     for (let i = 0; i < n; i++) {
       const v = dist[i]!
-      table[i * LANDMARK_COUNT + l] = Number.isFinite(v) ? v : 1e7
+      table[i * LANDMARK_COUNT + l] = Number.isFinite(v) ? v : UNREACHED_NM
       if (v < nearest[i]!) nearest[i] = v
       if (Number.isFinite(nearest[i]!) && nearest[i]! > farNm) { farNm = nearest[i]!; far = i }
     }
@@ -136,6 +200,8 @@ export function buildSeaGraphArrays(land: LandData, params: GraphParams = DEFAUL
   const nodes = buildGridNodes(land, field, params)
   const edges = buildGridEdges(land, field, nodes, params)
   const passageOf: number[] = nodes.lat.map(() => 0)
+  const gridCount = nodes.lat.length
+  bridgeComponents(land, nodes, edges, gridCount)
   addFairways(land, nodes, edges, passageOf)
   const n = nodes.lat.length
   const csr = packEdges(n, edges)

@@ -12,7 +12,7 @@ import type { LatLon } from '#shared/types/geo'
 import { prepareAreas } from './areas'
 import type { PreparedAreas } from './areas'
 import { coastDistanceNm } from './coast'
-import { EndError, joinedEnd } from './ends'
+import { EndError, joinedEnd, rejoinedOnMainWater } from './ends'
 import type { RouteEnd } from './ends'
 import { aStar } from './search'
 import type { CostModel } from './search'
@@ -54,7 +54,18 @@ export function prepareQuery(g: SeaGraph, opts: SeaRouteOptions): RouteQuery {
   const marked: number[] = []
   const mark = (k: number) => { if (!blocked![k]) { blocked![k] = 1; marked.push(k) } }
   for (const p of avoid) for (const k of g.gateEdges[p]!) mark(k)
-  if (avoid.size) for (let k = 0; k < g.passage.length; k++) if (g.passage[k] && avoid.has(g.passage[k]! - 1)) mark(k)
+  if (avoid.size) {
+    for (let k = 0; k < g.passage.length; k++) if (g.passage[k] && avoid.has(g.passage[k]! - 1)) mark(k)
+    // An avoided passage's fairway nodes are left out altogether: no edge into or out of them.
+    for (let u = 0; u < g.nodeCount; u++) {
+      if (!g.nodePassage[u] || !avoid.has(g.nodePassage[u]! - 1)) continue
+      for (let k = g.offsets[u]!; k < g.offsets[u + 1]!; k++) {
+        mark(k)
+        const back = edgeBetween(g, g.targets[k]!, u)
+        if (back >= 0) mark(back)
+      }
+    }
+  }
   for (const k of areas.blockedEdges) mark(k)
   const crossesAvoided = (lat1: number, lon1: number, lat2: number, lon2: number) => {
     for (const p of avoid) if (gateCrossed(p, lat1, lon1, lat2, lon2)) return true
@@ -164,14 +175,23 @@ export function seaRoute(g: SeaGraph, fromPos: LatLon, toPos: LatLon, opts: SeaR
     for (const [field, p] of [['from', fromPos], ['to', toPos]] as const) {
       if (Math.abs(p.lat) > q.limitLat) throw new EndError(field, `${field} lies beyond the limiting latitude ${q.limitLat}°`)
     }
-    const { end: from, seeds: sources } = joinedEnd(g, 'from', fromPos.lat, fromPos.lon, q.clearanceNm, q.limitLat)
-    const { end: to, seeds: targets } = joinedEnd(g, 'to', toPos.lat, toPos.lon, q.clearanceNm, q.limitLat)
-    const moved: SeaRouteResult['moved'] = {}
-    if (from.movedNm > 0) moved.from = from.movedNm
-    if (to.movedNm > 0) moved.to = to.movedNm
-    const path = aStar(g, sources, targets, to, q.model)
+    let a = joinedEnd(g, 'from', fromPos.lat, fromPos.lon, q.clearanceNm, q.limitLat)
+    let b = joinedEnd(g, 'to', toPos.lat, toPos.lon, q.clearanceNm, q.limitLat)
+    let path = aStar(g, a.seeds, b.seeds, b.end, q.model)
+    if (!path) {
+      // An end in water the coarse coastline closes off is moved onto the main body of water nearby.
+      const a2 = rejoinedOnMainWater(g, 'from', fromPos.lat, fromPos.lon, a, q.limitLat)
+      const b2 = rejoinedOnMainWater(g, 'to', toPos.lat, toPos.lon, b, q.limitLat)
+      if (a2 || b2) {
+        a = a2 ?? a; b = b2 ?? b
+        path = aStar(g, a.seeds, b.seeds, b.end, q.model)
+      }
+    }
     if (!path) throw new NoRouteError('No sea route joins from and to under these settings')
-    return describeRoute(g, q, routeThrough(g, q, from, to, path.nodes), moved)
+    const moved: SeaRouteResult['moved'] = {}
+    if (a.end.movedNm > 0) moved.from = a.end.movedNm
+    if (b.end.movedNm > 0) moved.to = b.end.movedNm
+    return describeRoute(g, q, routeThrough(g, q, a.end, b.end, path.nodes), moved)
   }
   finally { q.release() }
 }

@@ -1,7 +1,7 @@
 // Shortest paths over the navigable graph: A* with a landmark (ALT) and great-circle lower bound
 // for one route, Dijkstra from one place to all others for distance tables (flatqueue as the
 // binary heap). Edge cost = length × a clearance penalty when the edge passes closer to land
-// than the requested clearance, × an area factor; blocked edges and nodes poleward of the limiting
+// than the requested clearance (none along a passage's fairway), × an area factor; blocked edges and nodes poleward of the limiting
 // latitude are skipped.
 import FlatQueue from 'flatqueue'
 import type { Csr } from './graphBuild'
@@ -31,7 +31,8 @@ export interface SearchGraph extends Csr {
 export interface Seed { node: number, costNm: number }
 
 export function edgeCost(g: Csr, k: number, u: number, v: number, m: CostModel): number {
-  const c = g.edgeClearNm[k]!, want = m.clearanceNm
+  // A declared passage's fairway is the track ships keep in narrow water: its clearance is what the passage allows, not a penalty.
+  const c = g.passage[k] ? Infinity : g.edgeClearNm[k]!, want = m.clearanceNm
   let cost = g.lengthNm[k]! * (c >= want ? 1 : 1 + CLEARANCE_PENALTY * (1 - c / want))
   if (m.nodeFactor) cost *= Math.max(m.nodeFactor[u]!, m.nodeFactor[v]!)
   return cost

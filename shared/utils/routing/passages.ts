@@ -15,6 +15,8 @@ export interface Passage {
    * they are and may cross the coarse coastline (a canal, a narrow strait).
    */
   fairway?: [number, number][]
+  /** Half-width (nm) of the corridor round the fairway inside which a planned leg counts as following the passage. */
+  corridorNm?: number
   /** A line across the passage, from land to land: a route crossing it uses the passage; avoiding it blocks the crossing. */
   gate: [[number, number], [number, number]]
   source: string
@@ -75,7 +77,12 @@ export const PASSAGES: readonly Passage[] = [
     gate: [[1.45, 104.0], [1.05, 104.0]],
     source: 'Fairway laid from memory, then set to the middle of the channel on the 1:10m coastline',
   },
-  { id: 'magellan', name: 'Strait of Magellan', kind: 'strait', gate: [[-52.3, -69.6], [-52.8, -69.6]], source: 'Gate from memory' },
+  {
+    id: 'magellan', name: 'Strait of Magellan', kind: 'strait',
+    fairway: [[-52.442, -68.292], [-52.442, -69.508], [-52.558, -69.675], [-52.758, -70.475], [-53.875, -71.008], [-53.908, -71.425], [-53.642, -72.308], [-53.558, -72.458], [-53.558, -72.558], [-53.442, -72.825], [-53.225, -73.275], [-52.992, -73.658], [-52.442, -74.992]],
+    gate: [[-52.3, -69.6], [-52.8, -69.6]],
+    source: 'Fairway from memory (Primera and Segunda Angostura, Cabo Froward, Paso Inglés, Long Reach), then set to the middle of the channel on the 1:10m coastline; gate from memory',
+  },
   { id: 'torres', name: 'Torres Strait', kind: 'strait', gate: [[-11.0, 142.3], [-9.0, 142.3]], source: 'Gate from memory' },
   { id: 'dover', name: 'Dover Strait', kind: 'strait', gate: [[51.18, 1.3], [50.84, 1.65]], source: 'Gate from memory' },
   { id: 'gibraltar', name: 'Strait of Gibraltar', kind: 'strait', gate: [[36.1, -5.6], [35.8, -5.6]], source: 'Gate from memory' },
