@@ -206,9 +206,12 @@ export function landMarks(g: ChartGeometry, legs: readonly LandCheckLeg[] | unde
   const out: ChartLandMark[] = []
   for (const l of legs ?? []) {
     const ref = g.waypoints[l.index]?.lon
-    const p = l.crossesLand ? l.firstLandPoint : l.withinClearance ? l.closestCoastPoint : null
-    if (ref == null || !p) continue
-    out.push({ legIndex: l.index, kind: l.crossesLand ? 'crossing' : 'near', closestNm: l.closestApproachNm, lat: p.lat, lon: ref + wrapLongitude(p.lon - ref) })
+    // Every place the leg goes ashore, not only the first.
+    const points = l.crossesLand ? (l.crossings?.length ? l.crossings.map(c => c.enter) : [l.firstLandPoint]) : l.withinClearance ? [l.closestCoastPoint] : []
+    for (const p of points) {
+      if (ref == null || !p) continue
+      out.push({ legIndex: l.index, kind: l.crossesLand ? 'crossing' : 'near', closestNm: l.closestApproachNm, lat: p.lat, lon: ref + wrapLongitude(p.lon - ref) })
+    }
   }
   return out
 }

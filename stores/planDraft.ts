@@ -1,5 +1,5 @@
 import { skipHydrate } from 'pinia'
-import type { LandCheckResult } from '#shared/types/landCheck'
+import type { LandCheckResult, StoredLandCheck } from '#shared/types/landCheck'
 import type { PlanDetail } from '#shared/types/plan'
 import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
@@ -17,7 +17,7 @@ export interface PlanHeaderDraft {
 }
 
 /** What the draft loads from a plan view (the workspace page fetches no legs: it computes them). */
-type LoadedView = Pick<PlanView, 'plan' | 'waypoints'>
+type LoadedView = Pick<PlanView, 'plan' | 'waypoints'> & { landCheck?: StoredLandCheck | null }
 
 /** Same leg data, field by field (what a save would send). */
 function sameWaypoint(a: Waypoint, b: Waypoint | undefined) {
@@ -51,8 +51,8 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
   const cellErrors = ref<Record<string, string>>({})
   /** Where the chart is looking (UI state), so a first waypoint can start there. */
   const viewCentre = ref<{ lat: number, lon: number } | null>(null)
-  /** The last land check of the current track, cleared by any change to the waypoints. */
-  const landCheck = skipHydrate(shallowRef<LandCheckResult | null>(null))
+  /** The last land check of the current track (kept with the plan when it has an id), cleared by any change to the waypoints. */
+  const landCheck = skipHydrate(shallowRef<LandCheckResult | StoredLandCheck | null>(null))
   const legMemo = createLegMemo()
 
   const headerDirty = computed(() => JSON.stringify(header.value) !== JSON.stringify(savedHeader.value))
@@ -75,7 +75,8 @@ export const usePlanDraftStore = defineStore('planDraft', () => {
   function load(view: LoadedView) {
     const p = view.plan
     plan.value = p
-    landCheck.value = null
+    // The kept check belongs to the saved track: shown only while it is the track checked.
+    landCheck.value = view.landCheck?.current ? view.landCheck : null
     planId.value = p.id
     version.value = p.version
     status.value = p.status

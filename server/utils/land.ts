@@ -10,6 +10,7 @@ import { densifyLeg } from '#shared/utils/track'
 import { geodesicInverse } from '#shared/utils/geodesic'
 import { normaliseLongitude } from '#shared/utils/position'
 import type { LatLon, LegMethod } from '#shared/types/geo'
+import type { LandCrossing } from '#shared/types/landCheck'
 
 /** Land polygons as planar lon/lat rings, with the indexes the checks and the tiles use. */
 export interface LandData {
@@ -263,7 +264,7 @@ export function pointOnEdge(d: LandData, n: Nearest): LatLon {
 }
 
 /** Splits a→b at the 180° meridian when it crosses it (shortest way round). */
-function seamPieces(a: LatLon, b: LatLon): [number, number, number, number][] {
+export function seamPieces(a: LatLon, b: LatLon): [number, number, number, number][] {
   const ax = normaliseLongitude(a.lon), bx = normaliseLongitude(b.lon)
   if (Math.abs(bx - ax) <= 180) return [[ax, a.lat, bx, b.lat]]
   const bu = bx + (bx < ax ? 360 : -360)
@@ -354,4 +355,36 @@ export function geodesicCrossesLand(lat1: number, lon1: number, lat2: number, lo
   const points = densifyLeg({ lat: lat1, lon: lon1 }, { lat: lat2, lon: lon2 }, 'geodesic', stepNm)
   for (let i = 0; i < points.length - 1; i++) if (firstCrossing(d, points[i]!, points[i + 1]!)) return true
   return false
+}
+
+/**
+ * Every stretch of a densified track over land, in order: where it goes ashore (a coastline edge
+ * crossed from the sea, or the first point when that is ashore) and where it is afloat again (null
+ * when the track ends ashore). The same segment/edge intersections as checkTrack, all of them.
+ */
+export function landCrossings(points: LatLon[]): LandCrossing[] {
+  const d = landData()
+  const out: LandCrossing[] = []
+  const start = points[0]
+  if (!start) return out
+  let ashore = isLandIn(d, start.lat, start.lon)
+  if (ashore) out.push({ enter: { lat: start.lat, lon: normaliseLongitude(start.lon) }, exit: null })
+  for (let i = 0; i < points.length - 1; i++) {
+    for (const [ax, ay, bx, by] of seamPieces(points[i]!, points[i + 1]!)) {
+      const ts: number[] = []
+      for (const e of d.edgeIndex.search(Math.min(ax, bx), Math.min(ay, by), Math.max(ax, bx), Math.max(ay, by))) {
+        if (d.artificial[e]) continue
+        const t = crossingParam(d, e, ax, ay, bx, by)
+        if (t >= 0 && t <= 1) ts.push(t)
+      }
+      ts.sort((a, b) => a - b)
+      for (const t of ts) {
+        const p = { lat: ay + t * (by - ay), lon: normaliseLongitude(ax + t * (bx - ax)) }
+        if (ashore) out[out.length - 1]!.exit = p
+        else out.push({ enter: p, exit: null })
+        ashore = !ashore
+      }
+    }
+  }
+  return out
 }

@@ -73,6 +73,7 @@ const VIEW_SQL = `select
   (select json_build_array(lat, lon) from waypoints where plan_id = :id order by seq limit 1) as first,
   (select json_build_array(lat, lon) from waypoints where plan_id = :id order by seq desc limit 1) as last,
   (select count(*)::int from waypoints where plan_id = :id) as count,
+  ${TRACK_MD5_SQL} as track_md5,
   l.plan_version, l.engine, l.zone_signature, l.legs_json, l.totals_json, l.fuel_input_json
   from (select 1) one left join plan_legs l on l.plan_id = :id`
 
@@ -87,7 +88,8 @@ export async function getPlanViewJson(user: SessionUser, id: number): Promise<st
     ? { legsJson: r.legs_json, totalsJson: r.totals_json, fuelInput: JSON.parse(r.fuel_input_json) as FuelInput }
     : await storeLegs(useDb(), plan, await loadWaypoints(id))
   const fuel = await fuelForPlan(user.companyId, plan.vesselId, legs.fuelInput.legs, legs.fuelInput.zones)
-  return `{"plan":${JSON.stringify(plan)},"waypoints":${r.waypoints},"legs":${legs.legsJson},"totals":${legs.totalsJson},"fuel":${JSON.stringify(fuel)},"events":${r.events}}`
+  const landCheck = await latestLandCheck(useDb(), id, r.track_md5)
+  return `{"plan":${JSON.stringify(plan)},"waypoints":${r.waypoints},"legs":${legs.legsJson},"totals":${legs.totalsJson},"fuel":${JSON.stringify(fuel)},"events":${r.events},"landCheck":${JSON.stringify(landCheck)}}`
 }
 
 export async function getPlanView(user: SessionUser, id: number): Promise<PlanView> {

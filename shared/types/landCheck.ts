@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { latLonSchema, legMethodSchema } from './geo'
+import { idSchema, versionSchema } from './fields'
 import type { LatLon } from './geo'
 
 /** Shown with every land check result (the general caution is LAND_CHECK_CAUTION in shared/utils/cautions.ts). */
@@ -31,12 +32,49 @@ export const landCheckSchema = z.object({
 })
 export type LandCheckInput = z.infer<typeof landCheckSchema>
 
+/** One stretch of a leg over land: where the track goes ashore and where it is afloat again (null: it ends ashore). */
+export interface LandCrossing { enter: LatLon, exit: LatLon | null }
+
 export interface LandCheckLeg {
   index: number
   crossesLand: boolean
   firstLandPoint: LatLon | null
+  /** Every stretch over land, in the order the leg meets them (empty when it crosses none). */
+  crossings: LandCrossing[]
   closestApproachNm: number
   closestCoastPoint: LatLon
   withinClearance: boolean
 }
 export interface LandCheckResult { legs: LandCheckLeg[], caution: string }
+
+/** A leg the check flags: it crosses land or passes within the clearance. */
+export const isFlaggedLeg = (l: Pick<LandCheckLeg, 'crossesLand' | 'withinClearance'>) => l.crossesLand || l.withinClearance
+
+export const LAND_CHECK_NOTE_MAX = 1000
+
+/** Checks the plan's saved track and keeps the result; `version` is the version the caller looked at. */
+export const planLandCheckSchema = z.object({ version: versionSchema, clearanceNm: landCheckSchema.shape.clearanceNm })
+export type PlanLandCheckInput = z.infer<typeof planLandCheckSchema>
+
+export const landCheckAckSchema = z.object({
+  checkId: idSchema,
+  legIndex: z.number({ error: 'must be a number' }).int('must be a whole number').min(0, 'must be 0 or more').max(LAND_CHECK_MAX_WAYPOINTS, `at most ${LAND_CHECK_MAX_WAYPOINTS}`),
+  note: z.string({ error: 'a note is required' }).trim().min(1, 'a note is required').max(LAND_CHECK_NOTE_MAX, `at most ${LAND_CHECK_NOTE_MAX} characters`)
+    .refine(s => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/.test(s), 'may not contain control characters'),
+})
+export type LandCheckAckInput = z.infer<typeof landCheckAckSchema>
+
+export interface LandCheckAck { legIndex: number, note: string, userName: string, createdAt: string }
+
+/** The last land check kept for a plan, as GET /api/plans/:id sends it. */
+export interface StoredLandCheck extends LandCheckResult {
+  id: number
+  planVersion: number
+  clearanceNm: number
+  flaggedLegs: number
+  checkedBy: string
+  checkedAt: string
+  /** False once the track (positions or leg methods) has changed since the check. */
+  current: boolean
+  acknowledgements: LandCheckAck[]
+}

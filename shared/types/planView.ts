@@ -5,6 +5,7 @@ import type { LegTableTotals, PlanLeg } from '../utils/legTable'
 import type { FuelReserve } from './fuel'
 import type { PlanDetail, PlanEvent } from './plan'
 import type { Waypoint } from './waypoint'
+import type { StoredLandCheck } from './landCheck'
 import type { FuelByGrade } from '../utils/zones/fuelSplit'
 import type { PlanZoneTotals } from '../utils/zones/legZones'
 import type { LegZoneDistance } from '../utils/zones/types'
@@ -36,4 +37,6 @@ export interface PlanView {
   /** Null when the vessel has fewer than two fuel points (no curve to fit). */
   fuel: PlanFuel | null
   events: PlanEvent[]
+  /** The last land check kept for the plan (null when none was run on a saved track). */
+  landCheck: StoredLandCheck | null
 }

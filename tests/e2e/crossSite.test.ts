@@ -62,7 +62,8 @@ describe('requests from another site', () => {
 
     // Still signed in: the plan opens with the master's own Approve button, which works.
     await openPage(page, `/plans/${planId}`)
-    await page.getByRole('button', { name: 'Approve' }).click()
+    await page.getByTestId('signoff-actions').getByRole('button', { name: 'Approve' }).click()
+    await page.getByTestId('confirm-approve').click()
     await page.getByTestId('signoff-panel').locator('[data-status="approved"]').waitFor()
     await shoot(page, 'cross-site-after')
     expect(await planStatus(master, planId)).toBe('approved')

@@ -27,6 +27,11 @@ describe('sign-off and crew brief across two instances', () => {
     const planner = await browser.newPage()
     await signIn(planner, 'planner')
     await openPage(planner, `/plans/${id}`)
+    // The planner's land check of the saved track is kept with the plan for the master.
+    await planner.getByTestId('run-land-check').click()
+    await planner.getByTestId('land-check-kept').waitFor()
+    const { landCheck } = (await api.request(`/api/plans/${id}`)).body
+    expect(landCheck.current).toBe(true)
     await planner.getByRole('button', { name: 'Submit for sign-off' }).click()
     await planner.getByTestId('signoff-panel').locator('[data-status="submitted"]').waitFor()
     expect(await planner.getByRole('button', { name: 'Approve' }).count()).toBe(0)
@@ -35,7 +40,25 @@ describe('sign-off and crew brief across two instances', () => {
     await openPage(master, `${second.url}/login`)
     await signIn(master, 'master', second.url)
     await openPage(master, `${second.url}/plans/${id}`)
-    await master.getByRole('button', { name: 'Approve' }).click()
+    // Beside the approval: the kept land check, by whom and what it found.
+    const kept = master.getByTestId('signoff-land-check')
+    expect(await kept.textContent()).toContain(`Land check by ${landCheck.checkedBy}`)
+    expect(await kept.textContent()).toContain(landCheck.flaggedLegs ? `${landCheck.flaggedLegs} of 1 legs flagged` : 'no leg flagged')
+
+    // Approval asks first, naming the plan, its revision, the land check and the zones; "Not yet" changes nothing.
+    await master.getByTestId('signoff-actions').getByRole('button', { name: 'Approve' }).click()
+    const dialog = master.getByTestId('approve-dialog')
+    await dialog.waitFor()
+    expect(await dialog.getByTestId('approve-plan').textContent()).toBe('Sign-off run – Lizard to Ushant')
+    expect(await dialog.getByTestId('approve-revision').textContent()).toBe('1')
+    expect(await dialog.getByTestId('approve-land-check').textContent()).toContain(landCheck.checkedBy)
+    expect(await dialog.getByTestId('approve-zones').textContent()).toMatch(/no no-go or risk area/)
+    await shoot(master, 'signoff-confirm')
+    await dialog.getByRole('button', { name: 'Not yet' }).click()
+    await dialog.waitFor({ state: 'hidden' })
+    expect((await api.request(`/api/plans/${id}`)).body.plan.status).toBe('submitted')
+    await master.getByTestId('signoff-actions').getByRole('button', { name: 'Approve' }).click()
+    await dialog.getByTestId('confirm-approve').click()
     await master.getByTestId('approval-line').getByText('Approved by').waitFor()
     await master.getByTestId('signoff-panel').locator('[data-status="approved"]').waitFor()
     await shoot(master, 'signoff-approved')

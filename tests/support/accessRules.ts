@@ -66,6 +66,8 @@ export const RULES: Record<string, AccessRule> = {
   'POST /api/plans/:id/revise': { roles: EDIT, record: 'plan' },
   'POST /api/plans/:id/copy': { roles: EDIT, record: 'plan', body: { reversed: true } },
   'POST /api/plans/:id/remarks': { roles: ALL, record: 'plan', body: { remarks: 'Scope probe' } },
+  'POST /api/plans/:id/land-check': { roles: EDIT, record: 'plan', body: { version: 1, clearanceNm: 5 } },
+  'POST /api/plans/:id/land-check/acknowledge': { roles: EDIT, record: 'plan', body: { checkId: 1, legIndex: 0, note: 'Scope probe' } },
   'POST /api/plans/:id/brief': { roles: ['planner', 'master', 'shore'], record: 'plan' },
   'GET /api/plans/:id/export': { roles: ALL, record: 'plan', query: '?format=csv' },
   'GET /api/tables': { roles: ALL },

@@ -103,13 +103,18 @@ describe('land check marks', () => {
     const g = createChartGeometry()(pacific)
     const coast = { lat: 48.4, lon: -124.7 }
     const legs = [
-      { index: 0, crossesLand: false, firstLandPoint: null, closestApproachNm: 30, closestCoastPoint: coast, withinClearance: false },
-      { index: 1, crossesLand: false, firstLandPoint: null, closestApproachNm: 3.2, closestCoastPoint: coast, withinClearance: true },
-      { index: 2, crossesLand: true, firstLandPoint: { lat: 48.3, lon: -123.9 }, closestApproachNm: 0, closestCoastPoint: coast, withinClearance: true },
+      { index: 0, crossesLand: false, firstLandPoint: null, crossings: [], closestApproachNm: 30, closestCoastPoint: coast, withinClearance: false },
+      { index: 1, crossesLand: false, firstLandPoint: null, crossings: [], closestApproachNm: 3.2, closestCoastPoint: coast, withinClearance: true },
+      {
+        index: 2, crossesLand: true, firstLandPoint: { lat: 48.3, lon: -123.9 }, closestApproachNm: 0, closestCoastPoint: coast, withinClearance: true,
+        crossings: [{ enter: { lat: 48.3, lon: -123.9 }, exit: { lat: 48.31, lon: -123.8 } }, { enter: { lat: 48.35, lon: -123.5 }, exit: null }],
+      },
     ]
     const marks = landMarks(g, legs)
-    expect(marks.map(m => [m.legIndex, m.kind])).toEqual([[1, 'near'], [2, 'crossing']])
+    // One mark for every place a leg goes ashore, not only the first.
+    expect(marks.map(m => [m.legIndex, m.kind])).toEqual([[1, 'near'], [2, 'crossing'], [2, 'crossing']])
     expect(marks[0]!.lon).toBeCloseTo(360 - 124.7, 9)
     expect(marks[1]!.lon).toBeCloseTo(360 - 123.9, 9)
+    expect(marks[2]!.lon).toBeCloseTo(360 - 123.5, 9)
   })
 })
