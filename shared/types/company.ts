@@ -27,6 +27,17 @@ export const mailFromSchema = z.string({ error: mailFromText }).trim().max(320, 
   return name ? `${name} <${address.data}>` : address.data
 })
 
+/** Voyage monitoring thresholds (see shared/utils/monitoring/workReport.ts); each falls back to its default. */
+export const monitoringSettingsSchema = z.object({
+  /** Corridor half-width for legs without their own XTE limit, nm. */
+  defaultXteNm: z.number({ error: 'must be a number' }).finite().min(0.1, 'must be from 0.1 to 100 nm').max(100, 'must be from 0.1 to 100 nm').optional(),
+  /** Hours the ETA may slip past the planned arrival before a report is flagged late. */
+  lateH: z.number({ error: 'must be a number' }).finite().min(0, 'must be from 0 to 240 h').max(240, 'must be from 0 to 240 h').optional(),
+  /** Percentage by which fuel used may exceed the plan's fuel for the distance sailed. */
+  fuelPct: z.number({ error: 'must be a number' }).finite().min(0, 'must be from 0 to 200 %').max(200, 'must be from 0 to 200 %').optional(),
+}).strict()
+export type MonitoringSettings = z.infer<typeof monitoringSettingsSchema>
+
 /** Company settings (admin): the fuel reserve margin, the helm delay used for wheel-over, bunker prices. */
 export const companySettingsSchema = z.object({
   reserve: fuelReserveSchema,
@@ -35,5 +46,6 @@ export const companySettingsSchema = z.object({
   helmDelayS: z.number({ error: 'helmDelayS must be a number' }).finite().min(0, 'helmDelayS must not be negative').max(120, 'helmDelayS is at most 120'),
   /** Crew briefs go out from this address; without it, from the installation's NUXT_MAIL_FROM. */
   mailFrom: mailFromSchema.nullable().optional(),
+  monitoring: monitoringSettingsSchema.optional(),
 })
 export type CompanySettings = z.infer<typeof companySettingsSchema>

@@ -21,7 +21,7 @@ export interface PlaceListItem {
 }
 
 /** An angle given as decimal degrees (number) or as navigators write it (text): decimal degrees out. */
-function angleSchema(kind: 'latitude' | 'longitude') {
+export function angleSchema(kind: 'latitude' | 'longitude') {
   return z.union([z.number(), z.string()], { error: `${kind} is required` }).transform((value, ctx) => {
     try {
       if (typeof value === 'string' && !value.trim()) throw new Error(`${kind} is required`)
