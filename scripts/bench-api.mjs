@@ -2,7 +2,8 @@
 // autocannon on loopback against the production build. Prints req/s, p50, p99 and ratios.
 // BENCH_OUTPUTS lists builds to measure one after the other in the same run (default `.output`), e.g.
 // a build of main beside this one: BENCH_OUTPUTS=/tmp/main-output,.output. BENCH_PROFILE=DIR runs
-// each server under `node --cpu-prof` and leaves its profile in DIR.
+// each server under `node --cpu-prof` and leaves its profile in DIR (`node scripts/profile-top.mjs DIR`
+// lists the top functions). BENCH_ONLY=REGEX measures only the routes whose name matches, e.g. BENCH_ONLY=plans.
 import { spawn } from 'node:child_process'
 import { readFileSync } from 'node:fs'
 import autocannon from 'autocannon'
@@ -75,9 +76,11 @@ for (const output of outputs) {
     ['GET /api/plans/:id (1,000 waypoints)', () => load('plan', `/api/plans/${plan1000}`, cookie), 0.15, 3],
     ['GET /tiles/3/4/2.png (cached)', () => load('tile', '/tiles/3/4/2.png', cookie), null, 5],
   ]
+  const only = process.env.BENCH_ONLY ? new RegExp(process.env.BENCH_ONLY) : null
   console.log(`\nbuild: ${output}`)
   console.log('route'.padEnd(38), 'req/s'.padStart(9), 'p50 ms'.padStart(8), 'p99 ms'.padStart(8), '  vs GET /api/auth/me (same run)')
   for (const [name, run, goal, tail] of pairs) {
+    if (only && !only.test(name)) continue
     const trivial = await load('me', '/api/auth/me', cookie)
     const r = await run()
     const ratio = r.rps / trivial.rps
