@@ -6,6 +6,7 @@ import type { SessionUser } from '#shared/types/auth'
 import type { LegMethod } from '#shared/types/geo'
 import { isFlaggedLeg, LAND_CHECK_RESULT_CAUTION, type LandCheckAck, type LandCheckAckInput, type LandCheckLeg, type PlanLandCheckInput, type StoredLandCheck } from '#shared/types/landCheck'
 import { densifyLeg } from '#shared/utils/track'
+import { passageOfLeg } from '#shared/utils/routing/passageLegs'
 import { checkLegs, landCrossings } from './land'
 
 /** Densifying step of the land check, nm (what checkLegs uses at most). */
@@ -13,19 +14,26 @@ const STEP_NM = 2
 
 interface TrackPoint { lat: number, lon: number, method?: LegMethod | null }
 
-/** The land check of a track, leg by leg, with every stretch over land of the legs that cross it. */
+/**
+ * The land check of a track, leg by leg, with every stretch over land of the legs that cross it.
+ * A leg following a declared passage's fairway (within its corridor) is reported as through that
+ * passage instead: the coarse coastline closes canals and narrow straits.
+ */
 export function checkTrackLegs(waypoints: readonly TrackPoint[], clearanceNm: number): LandCheckLeg[] {
   const legs = waypoints.slice(1).map((to, i) => ({ from: waypoints[i]!, to, method: to.method ?? 'rhumb' }))
   return checkLegs(legs, clearanceNm, STEP_NM).map((leg) => {
     const { from, to, method } = legs[leg.index]!
+    const passage = passageOfLeg(from, to, method)
+    const crossesLand = !passage && leg.crossesLand
     return {
       index: leg.index,
-      crossesLand: leg.crossesLand,
-      firstLandPoint: leg.firstLandPoint ? { lat: leg.firstLandPoint.lat, lon: leg.firstLandPoint.lon } : null,
-      crossings: leg.crossesLand ? landCrossings(densifyLeg(from, to, method, STEP_NM)) : [],
+      crossesLand,
+      firstLandPoint: crossesLand && leg.firstLandPoint ? { lat: leg.firstLandPoint.lat, lon: leg.firstLandPoint.lon } : null,
+      crossings: crossesLand ? landCrossings(densifyLeg(from, to, method, STEP_NM)) : [],
       closestApproachNm: leg.closestApproachNm,
       closestCoastPoint: leg.closestCoastPoint,
-      withinClearance: leg.withinClearance,
+      withinClearance: !passage && leg.withinClearance,
+      passage: passage ? { id: passage.id, name: passage.name } : null,
     }
   })
 }

@@ -44,6 +44,8 @@ export interface LandCheckLeg {
   closestApproachNm: number
   closestCoastPoint: LatLon
   withinClearance: boolean
+  /** The declared passage whose fairway corridor holds the leg (then neither crossesLand nor withinClearance), else null; the API always sends it. */
+  passage?: { id: string, name: string } | null
 }
 export interface LandCheckResult { legs: LandCheckLeg[], caution: string }
 
