@@ -45,7 +45,8 @@ describe('sea-route panel', () => {
     await page.locator('path.pw-route-preview').waitFor()
     expect(await rows(page).count()).toBe(2)
     expect(await totalNm(page)).toBe(geodesicTotal)
-    await page.waitForTimeout(600) // let the tiles of the fitted view paint for the screenshot
+    // The tiles of the fitted view painted before the screenshot.
+    await page.waitForFunction(() => [...document.querySelectorAll<HTMLImageElement>('img.leaflet-tile')].every(i => i.complete))
     await shoot(page, 'sea-route-preview-1440')
 
     await panel.getByTestId('sea-route-accept').click()
@@ -56,6 +57,15 @@ describe('sea-route panel', () => {
     expect(await page.getByTestId('waypoint-row').first().getAttribute('data-lat')).toBe(String(ENDS[0]!.lat))
     expect(await page.getByTestId('save-state').textContent()).toBe('unsaved changes')
     await shoot(page, 'sea-route-accepted-1440')
+
+    // The land check takes the accepted route's canal legs as through the Suez Canal, not as land.
+    await page.getByTestId('run-land-check').click()
+    const check = page.getByTestId('land-check')
+    await check.getByTestId('land-check-summary').waitFor()
+    await expect.poll(() => check.getByTestId('land-check-passage').count()).toBeGreaterThan(3)
+    expect(await check.getByTestId('land-check-passage').first().textContent()).toBe('through Suez Canal')
+    await check.scrollIntoViewIfNeeded()
+    await shoot(page, 'sea-route-land-check-1440')
 
     // One undo gives back the two waypoints as they were.
     await page.getByTestId('undo').click()
