@@ -1,6 +1,6 @@
 import type { Knex } from 'knex'
 import type { SessionUser } from '#shared/types/auth'
-import type { PlanCreateInput, PlanDetail, PlanEvent, PlanHeaderInput, PlanSummary } from '#shared/types/plan'
+import type { BoardSortKey, PlanBoardPage, PlanBoardQuery, PlanCreateInput, PlanDetail, PlanEvent, PlanHeaderInput, PlanSummary } from '#shared/types/plan'
 import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
 import type { FuelInput, StoredLegs } from './planLegs'
@@ -195,4 +195,44 @@ export async function updatePlanHeader(user: SessionUser, id: number, input: Pla
     await storeLegTable(trx, { ...plan, version: input.version + 1, departureUtc: input.departureUtc, speedKn: input.speedKn }, await loadWaypoints(id, trx))
   })
   return getPlanView(user, id)
+}
+
+const BOARD_SORT_COLUMNS: Record<BoardSortKey, string> = {
+  title: 'plans.title', vesselName: 'vessels.name', status: 'plans.status',
+  departureUtc: 'plans.departure_utc', totalNm: 'plans.total_nm', arrivalUtc: 'plans.arrival_utc',
+}
+/** A finished voyage: approved, and its ETA has passed. The board's `current` view leaves these out. */
+const FINISHED_SQL = `(plans.status = 'approved' and plans.arrival_utc < now())`
+const likePattern = (text: string) => `%${text.replace(/[\\%_]/g, m => `\\${m}`)}%`
+
+/** One page of the company's plans for the passage board: filtered, sorted and counted in PostgreSQL. */
+export async function listPlanBoard(user: SessionUser, query: PlanBoardQuery): Promise<PlanBoardPage> {
+  const db = useDb()
+  const rows = db('plans').join('vessels', 'vessels.id', 'plans.vessel_id').where('plans.company_id', user.companyId)
+  if (query.view === 'current') rows.whereRaw(`not ${FINISHED_SQL}`)
+  if (query.status) rows.where('plans.status', query.status)
+  if (query.vesselId) rows.where('plans.vessel_id', query.vesselId)
+  if (query.q) {
+    const pattern = likePattern(query.q)
+    rows.where(w => w.whereRaw('plans.title ilike ?', [pattern])
+      .orWhereIn('plans.vessel_id', db('vessels').where('company_id', user.companyId).whereRaw('name ilike ?', [pattern]).select('id')))
+  }
+  const column = BOARD_SORT_COLUMNS[query.sort]
+  const [page, [counts]] = await Promise.all([
+    rows.clone().orderBy([{ column, order: query.dir, nulls: 'last' }, { column: 'plans.id', order: query.dir }])
+      .limit(query.pageSize).offset((query.page - 1) * query.pageSize)
+      .select([...summaryColumns, db.raw('count(*) over ()::int as "boardTotal"')]),
+    db('plans').where('company_id', user.companyId)
+      .select(db.raw(`count(*) filter (where not ${FINISHED_SQL})::int as current, count(*) filter (where ${FINISHED_SQL})::int as finished`)),
+  ])
+  // A page past the end has no rows to carry the window count: count once more.
+  const total = page.length ? page[0].boardTotal : query.page > 1 ? Number((await rows.clone().count({ n: '*' }))[0]?.n ?? 0) : 0
+  return {
+    plans: page.map(({ boardTotal: _, ...row }) => toSummary(row)),
+    total,
+    viewTotal: query.view === 'current' ? counts.current : counts.current + counts.finished,
+    finished: counts.finished,
+    page: query.page,
+    pageSize: query.pageSize,
+  }
 }

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { dateTimeUtcSchema, idSchema, latSchema, speedKnSchema, versionSchema } from './fields'
+import { dateTimeUtcSchema, idSchema, latSchema, numberTextSchema, speedKnSchema, versionSchema } from './fields'
 import { waypointListSchema } from './waypoint'
 
 export const planStatuses = ['draft', 'submitted', 'approved', 'returned'] as const
@@ -80,4 +80,39 @@ export interface PlanDetail extends PlanSummary {
   masterUserId: number | null
   /** The vessel's service speed, for the warning when the plan is faster. */
   vesselServiceSpeedKn?: number | null
+}
+
+/** Columns the passage board sorts by (server side). */
+export const boardSortKeys = ['title', 'vesselName', 'status', 'departureUtc', 'totalNm', 'arrivalUtc'] as const
+export type BoardSortKey = typeof boardSortKeys[number]
+export const BOARD_MAX_PAGE_SIZE = 200
+const pageNumberSchema = z.number().int('must be a whole number').min(1, 'must be at least 1').max(100_000, 'is at most 100000')
+
+/**
+ * `GET /api/plans/board`: one page of the company's plans, sorted and filtered on the server.
+ * `view=current` (the default) leaves out finished voyages: approved plans whose ETA has passed.
+ */
+export const planBoardQuerySchema = z.object({
+  page: numberTextSchema(pageNumberSchema).optional().default(1),
+  pageSize: numberTextSchema(z.number().int('must be a whole number').min(1, 'must be at least 1').max(BOARD_MAX_PAGE_SIZE, `is at most ${BOARD_MAX_PAGE_SIZE}`)).optional().default(50),
+  sort: z.enum(boardSortKeys, { error: `must be one of ${boardSortKeys.join(', ')}` }).optional().default('departureUtc'),
+  dir: z.enum(['asc', 'desc'], { error: 'must be asc or desc' }).optional().default('desc'),
+  q: z.string({ error: 'must be text' }).trim().max(160, 'is at most 160 characters').optional().default(''),
+  status: z.enum(planStatuses, { error: `must be one of ${planStatuses.join(', ')}` }).optional(),
+  vesselId: numberTextSchema(idSchema).optional(),
+  view: z.enum(['current', 'all'], { error: 'must be current or all' }).optional().default('current'),
+}).strict()
+export type PlanBoardQuery = z.infer<typeof planBoardQuerySchema>
+export type PlanBoardQueryInput = z.input<typeof planBoardQuerySchema>
+
+export interface PlanBoardPage {
+  plans: PlanSummary[]
+  /** Plans matching the filter (all pages). */
+  total: number
+  /** Plans of the company in this view, before the text, status and vessel filters. */
+  viewTotal: number
+  /** Finished voyages the `current` view leaves out. */
+  finished: number
+  page: number
+  pageSize: number
 }

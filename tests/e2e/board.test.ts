@@ -30,4 +30,39 @@ describe('passage board', () => {
     await openPage(page, '/')
     await page.waitForURL(/\/login/)
   })
+
+  it('on a phone (390 px) the board never scrolls sideways and each row shows departure, distance and ETA', async () => {
+    const page = await browser.newPage(390, 844)
+    await signIn(page, 'planner')
+    await openPage(page, '/')
+    const row = page.getByTestId('board-row').filter({ hasText: 'Rotterdam – New York, North Atlantic' })
+    await row.waitFor()
+    const widths = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, viewport: window.innerWidth }))
+    expect(widths.scroll).toBeLessThanOrEqual(widths.viewport)
+    // The demo plan departs 2026-12-03 14:00 UTC (db/seeds/demoData.ts); its distance and ETA are worked out by the server.
+    for (const label of ['Departure UTC', 'Distance nm', 'ETA UTC']) {
+      const cell = row.locator('td', { hasText: label })
+      await cell.waitFor()
+      const box = (await cell.boundingBox())!
+      expect(box.x).toBeGreaterThanOrEqual(0)
+      expect(box.x + box.width).toBeLessThanOrEqual(widths.viewport)
+    }
+    expect(await row.locator('td', { hasText: 'Departure UTC' }).textContent()).toContain('2026-12-03')
+    expect(await row.locator('td', { hasText: 'Distance nm' }).textContent()).toMatch(/\d[\d,]*\.\d/)
+    await shoot(page, 'board-390')
+  })
+
+  it('pages, sorts and filters on the server, keeping the state in the address', async () => {
+    const page = await browser.newPage()
+    await signIn(page, 'planner')
+    await openPage(page, '/?q=Rotterdam')
+    const board = page.getByTestId('plan-board')
+    await board.getByText('Rotterdam – New York, North Atlantic').waitFor()
+    expect(await board.getByText('Yokohama – Juan de Fuca, North Pacific crossing').count()).toBe(0)
+    await page.getByLabel('Filter by passage or vessel').fill('Yokohama – Juan')
+    await board.getByText('Yokohama – Juan de Fuca, North Pacific crossing').waitFor()
+    await expect.poll(() => board.getByText('Rotterdam – New York, North Atlantic').count()).toBe(0)
+    await expect.poll(() => new URL(page.url()).searchParams.get('q')).toBe('Yokohama – Juan')
+    await shoot(page, 'board-filtered')
+  })
 })

@@ -55,6 +55,7 @@ export const RULES: Record<string, AccessRule> = {
   'PUT /api/places/:id': { roles: DESK, record: 'place', body: { name: 'Scope probe', kind: 'port', lat: 1, lon: 1 } },
   'DELETE /api/places/:id': { roles: DESK, record: 'place' },
   'GET /api/plans': { roles: ALL },
+  'GET /api/plans/board': { roles: ALL },
   'POST /api/plans': { roles: EDIT },
   'POST /api/plans/import': { roles: EDIT, body: csvUpload('name,latitude,longitude\nA,1,1\nB,2,2\n', { mode: 'preview' }) },
   'GET /api/plans/:id': { roles: ALL, record: 'plan' },
