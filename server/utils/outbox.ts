@@ -15,6 +15,7 @@
 //   duplicate. So: exactly once in normal operation and across SMTP outages and restarts; at
 //   least once (same Message-ID) if a worker dies between the SMTP "250 OK" and the update.
 import { randomUUID } from 'node:crypto'
+import type { Knex } from 'knex'
 import PgBoss from 'pg-boss'
 import nodemailer, { type Transporter } from 'nodemailer'
 import type { OutboxMessageSummary, OutboxRecipient } from '#shared/types/outbox'
@@ -55,24 +56,40 @@ export async function enqueueOutboxMessage(id: number) {
   await boss.send(OUTBOX_QUEUE, { outboxId: id }, { singletonKey: String(id), ...RETRY, expireInSeconds: 300 })
 }
 
-/** `mailFrom`: the company's own sender (its settings), else the installation's NUXT_MAIL_FROM. */
-export interface NewOutboxMessage { companyId: number, planId: number, queuedBy: number, recipients: OutboxRecipient[], subject: string, text: string, html: string, mailFrom: string }
+/** `mailFrom`: the company's own sender (its settings), else the installation's NUXT_MAIL_FROM; `kind` defaults to a crew brief. */
+export interface NewOutboxMessage { companyId: number, planId: number, queuedBy: number, recipients: OutboxRecipient[], subject: string, text: string, html: string, mailFrom: string, kind?: 'crew_brief' | 'voyage_alert' }
 
-/** Commits the message as a queued row with its Message-ID fixed up front, then enqueues it. */
-export async function addToOutbox(message: NewOutboxMessage) {
-  const [row] = await useDb()('outbox_messages').insert({
-    company_id: message.companyId, plan_id: message.planId, queued_by: message.queuedBy, kind: 'crew_brief',
+/**
+ * Writes the message as a queued row with its Message-ID fixed up front, in `db` (a transaction, so
+ * the message commits with whatever raised it); the caller enqueues it once committed, and the sweep
+ * makes good an enqueue that never happens.
+ */
+export async function insertOutboxMessage(db: Knex | Knex.Transaction, message: NewOutboxMessage) {
+  const kind = message.kind ?? 'crew_brief'
+  const [row] = await db('outbox_messages').insert({
+    company_id: message.companyId, plan_id: message.planId, queued_by: message.queuedBy, kind,
     recipients: JSON.stringify(message.recipients), subject: message.subject, body_text: message.text, body_html: message.html,
-    state: 'queued', message_id: newMessageId(message.mailFrom), mail_from: message.mailFrom,
+    state: 'queued', message_id: newMessageId(message.mailFrom, kind === 'crew_brief' ? 'brief' : 'alert'), mail_from: message.mailFrom,
   }).returning(['id', 'message_id', 'state'])
-  // The row is already safe; a lost enqueue is made good by the sweep.
-  await enqueueOutboxMessage(row.id).catch(error => console.error(`[outbox] enqueue of message ${row.id} failed; the sweep will retry:`, error.message))
   return { id: row.id as number, messageId: row.message_id as string, state: row.state as string }
 }
 
-function newMessageId(mailFrom: string) {
+/** Asks for a committed row to be sent; a failed enqueue is logged and left to the sweep. */
+export async function enqueueCommitted(id: number) {
+  await enqueueOutboxMessage(id).catch(error => console.error(`[outbox] enqueue of message ${id} failed; the sweep will retry:`, error.message))
+}
+
+/** Commits the message as a queued row with its Message-ID fixed up front, then enqueues it. */
+export async function addToOutbox(message: NewOutboxMessage) {
+  const row = await insertOutboxMessage(useDb(), message)
+  // The row is already safe; a lost enqueue is made good by the sweep.
+  await enqueueCommitted(row.id)
+  return row
+}
+
+function newMessageId(mailFrom: string, prefix: string) {
   const domain = /@([^>\s]+)/.exec(mailFrom)?.[1] ?? 'passagewright.invalid'
-  return `<brief.${randomUUID()}@${domain}>`
+  return `<${prefix}.${randomUUID()}@${domain}>`
 }
 
 function smtp(): Transporter {

@@ -1,0 +1,1 @@
+export default defineRoleHandler(ALL_ROLES, async (_event, user) => listFleet(user))
