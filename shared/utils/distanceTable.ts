@@ -3,6 +3,10 @@
 import { G, geod } from './engine/wgs84'
 import type { TablePlace, TablePlan } from '../types/distanceTable'
 import { NM_M } from './navConstants'
+import type { LatLon, LegMethod } from '../types/geo'
+import { legZoneDistances } from './zones/legZones'
+import type { LegEndState } from './zones/legZones'
+import type { PreparedZones } from './zones/prepare'
 
 // A degree of latitude is never shorter than 59.7 nm on WGS84 (at the equator): a cheap lower bound.
 const MIN_NM_PER_DEG_LAT = 59.6
@@ -90,4 +94,19 @@ export function computeDistances(places: readonly TablePlace[], plans: readonly 
   const distanceNm = new Float64Array(pairCount(places.length))
   fillRows(places, choice, distanceNm, 0, places.length)
   return { choice, distanceNm }
+}
+
+/** Distance inside ECAs in force at `atMs` along legs joining the points, each by the method of the leg arriving at its end (as in the leg table). */
+export function ecaAlongNm(prepared: PreparedZones, points: readonly (LatLon & { method: LegMethod })[], atMs: number): number {
+  if (!prepared.zoneIndex) return 0
+  let sum = 0
+  let prev: LegEndState | undefined
+  for (let i = 0; i + 1 < points.length; i++) {
+    const end: LegEndState = new Map()
+    for (const z of legZoneDistances(prepared, { from: points[i]!, to: points[i + 1]!, method: points[i + 1]!.method, startMs: atMs, endMs: atMs }, prev, end)) {
+      if (z.kind === 'eca') sum += z.distanceNm
+    }
+    prev = end
+  }
+  return sum
 }

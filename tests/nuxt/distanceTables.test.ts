@@ -1,6 +1,8 @@
 // Distance tables against the seeded demo data: the approved Cape of Good Hope – Fremantle plan
-// gives its own distance; Rotterdam – New York has no approved plan (the seed's is 'submitted'),
-// so the table falls back to the direct geodesic, checked against GeodSolve as the oracle.
+// gives its own distance; pairs without an approved plan (Rotterdam – New York: the seed's plan is
+// 'submitted') take the computed sea route, never below the GeodSolve geodesic and within 4 % of
+// published port-to-port distances (from memory of NGA Pub. 151 and the commercial tables); the
+// direct geodesic (checked against GeodSolve) is left for pairs no sea route joins.
 import { execFileSync } from 'node:child_process'
 import { beforeAll, describe, expect, it } from 'vitest'
 import { type Api, loginAs, startServer } from '../support/server'
@@ -26,7 +28,7 @@ describe('distance tables', () => {
     places = (await shore.request('/api/places')).body
   })
 
-  it('takes the approved plan between its end places and links it; a pair without one is the direct geodesic, flagged', async () => {
+  it('takes the approved plan between its end places and links it; other pairs take the sea route with its passages', async () => {
     const names = ['Cape of Good Hope offing', 'Fremantle pilot boarding ground', 'Rotterdam', 'New York']
     const res = await shore.request('/api/tables', { method: 'POST', body: { name: 'Test four', placeIds: names.map(n => byName(n).id) } })
     expect(res.status).toBe(201)
@@ -34,6 +36,7 @@ describe('distance tables', () => {
     expect(t.status).toBe('ready')
     expect(t.progress).toBe(1)
     expect(t.radiusNm).toBe(30)
+    expect(t.avoid).toEqual([])
     const n = t.places.length
     const idx = (name: string) => t.places.findIndex((p: any) => p.name === name)
 
@@ -42,6 +45,7 @@ describe('distance tables', () => {
     const view = (await shore.request(`/api/plans/${cape.id}`)).body
     const k = pair(idx('Cape of Good Hope offing'), idx('Fremantle pilot boarding ground'), n)
     expect(t.matrix.planId[k]).toBe(cape.id)
+    expect(t.matrix.source[k]).toBe('plan')
     // The plan's own track, leg by leg from the oracles: GeodSolve for geodesic legs, RhumbSolve for rhumb legs.
     const wps = view.waypoints as { lat: number, lon: number, method: string }[]
     const legLines = wps.slice(1).map((b, i) => `${wps[i]!.lat} ${wps[i]!.lon} ${b.lat} ${b.lon}`)
@@ -53,21 +57,107 @@ describe('distance tables', () => {
     expect(t.matrix.crossesLand[k]).toBeNull()
     expect(t.matrix.plans).toContainEqual({ id: cape.id, title: cape.title })
 
-    // Every other pair has no plan: the direct geodesic, each checked against GeodSolve.
-    let direct = 0
+    // Every other pair has no plan: a sea route, never shorter than the geodesic (GeodSolve), never flagged as crossing land.
+    let sea = 0
     for (let i = 0; i < n; i++) for (let j = i + 1; j < n; j++) {
       const q = pair(i, j, n)
       if (q === k) continue
-      direct++
-      expect(t.matrix.planId[q]).toBeNull()
-      const oracle = geodSolveNm(t.places[i], t.places[j])
-      expect(Math.abs(t.matrix.distanceNm[q] - oracle), `${t.places[i].name} – ${t.places[j].name}`).toBeLessThan(0.001)
-      expect(typeof t.matrix.crossesLand[q]).toBe('boolean')
+      sea++
+      const label = `${t.places[i].name} – ${t.places[j].name}`
+      expect(t.matrix.planId[q], label).toBeNull()
+      expect(t.matrix.source[q], label).toBe('sea')
+      expect(t.matrix.crossesLand[q], label).toBeNull()
+      expect(Array.isArray(t.matrix.via[q]), label).toBe(true)
+      // The places may be moved up to 20 nm onto the routing graph's water: allow that at each end.
+      expect(t.matrix.distanceNm[q], label).toBeGreaterThan(geodSolveNm(t.places[i], t.places[j]) - 40)
     }
-    expect(direct).toBe(5)
+    expect(sea).toBe(5)
 
-    // The geodesic from the Cape to Rotterdam runs over Africa: flagged as crossing land.
-    expect(t.matrix.crossesLand[pair(idx('Cape of Good Hope offing'), idx('Rotterdam'), n)]).toBe(true)
+    // Rotterdam – New York: about 3,350 nm (from memory, see the top), through the Dover Strait.
+    const rn = pair(idx('Rotterdam'), idx('New York'), n)
+    expect(Math.abs(t.matrix.distanceNm[rn] - 3350) / 3350).toBeLessThan(0.04)
+    expect(t.matrix.via[rn]).toContain('dover')
+    expect(t.matrix.passages).toContainEqual({ id: 'dover', name: expect.any(String) })
+    // The Cape – Rotterdam geodesic runs over Africa; the sea route goes round it: about 6,170 nm from Cape Town (from memory).
+    const cr = pair(idx('Cape of Good Hope offing'), idx('Rotterdam'), n)
+    expect(Math.abs(t.matrix.distanceNm[cr] - 6170) / 6170).toBeLessThan(0.04)
+  })
+
+  it('builds the six-port table of the sea-routes issue by sea: no pair falls back to the direct geodesic or crosses land', async () => {
+    const stamp = Date.now().toString(36)
+    // Santos and Durban are not demo places: harbour entrances from memory.
+    const extra = await Promise.all([['Santos', -23.99, -46.3], ['Durban', -29.87, 31.05]].map(async ([name, lat, lon]) =>
+      (await shore.request('/api/places', { method: 'POST', body: { name: `${name} ${stamp}`, kind: 'port', lat, lon } })).body))
+    const ids = [...['Rotterdam', 'New York', 'Singapore', 'Yokohama'].map(n => byName(n).id), ...extra.map((p: any) => p.id)]
+    const res = await shore.request('/api/tables', { method: 'POST', body: { name: `Six ports ${stamp}`, placeIds: ids } })
+    expect(res.status).toBe(201)
+    const t = res.body
+    const n = t.places.length
+    const idx = (name: string) => t.places.findIndex((p: any) => p.name.startsWith(name))
+    expect(t.matrix.source.filter((s: string) => s !== 'plan').every((s: string) => s === 'sea')).toBe(true)
+    expect(t.matrix.crossesLand.every((c: boolean | null) => c !== true)).toBe(true)
+    // Published port-to-port distances, nm: all from memory (see the top of the file); within 4 %.
+    const published: [string, string, number][] = [
+      ['Rotterdam', 'Singapore', 8290], // from memory
+      ['Rotterdam', 'New York', 3350], // from memory
+      ['Rotterdam', 'Yokohama', 11170], // from memory
+      ['New York', 'Santos', 5000], // from memory
+      ['Singapore', 'Yokohama', 2890], // from memory
+    ]
+    for (const [a, b, nm] of published) {
+      const q = pair(idx(a), idx(b), n)
+      expect(t.matrix.source[q], `${a} – ${b}`).toBe('sea')
+      expect(Math.abs(t.matrix.distanceNm[q] - nm) / nm, `${a} – ${b}: ${t.matrix.distanceNm[q]}`).toBeLessThan(0.04)
+    }
+    expect(t.matrix.via[pair(idx('Rotterdam'), idx('Singapore'), n)]).toContain('suez')
+
+    // The same places with Suez avoided: Europe – Asia round the Cape, stored with the table and kept by a rebuild.
+    const cape = await shore.request('/api/tables', { method: 'POST', body: { name: `Six ports, no Suez ${stamp}`, placeIds: ids, avoid: ['suez'] } })
+    expect(cape.status).toBe(201)
+    expect(cape.body.avoid).toEqual(['suez'])
+    const rs = pair(idx('Rotterdam'), idx('Singapore'), n)
+    expect(cape.body.matrix.via[rs]).not.toContain('suez')
+    // Rotterdam – Singapore by the Cape: about 11,750 nm (from memory).
+    expect(Math.abs(cape.body.matrix.distanceNm[rs] - 11750) / 11750).toBeLessThan(0.04)
+    const again = await shore.request(`/api/tables/${cape.body.id}/rebuild`, { method: 'POST' })
+    expect(again.status).toBe(200)
+    expect(again.body.avoid).toEqual(['suez'])
+    expect(again.body.matrix.via[rs]).not.toContain('suez')
+  })
+
+  it('falls back to the direct geodesic, flagged, only where no sea route joins the places (the Caspian Sea has no passage out)', async () => {
+    const stamp = Date.now().toString(36)
+    // Off Baku, in the Caspian Sea (from memory): water no declared passage joins to the oceans.
+    const caspian = (await shore.request('/api/places', { method: 'POST', body: { name: `Caspian ${stamp}`, kind: 'ocean_position', lat: 40.2, lon: 50.4 } })).body
+    const ids = [caspian.id, byName('Rotterdam').id, byName('New York').id]
+    const t = (await shore.request('/api/tables', { method: 'POST', body: { name: `Caspian ${stamp}`, placeIds: ids } })).body
+    const n = t.places.length
+    const idx = (name: string) => t.places.findIndex((p: any) => p.name === name)
+    const cr = pair(idx(caspian.name), idx('Rotterdam'), n)
+    expect(t.matrix.source[cr]).toBe('direct')
+    expect(t.matrix.via[cr]).toBeNull()
+    expect(t.matrix.ecaNm[cr]).toBeNull()
+    expect(Math.abs(t.matrix.distanceNm[cr] - geodSolveNm(caspian, byName('Rotterdam')))).toBeLessThan(0.001)
+    expect(t.matrix.crossesLand[cr]).toBe(true) // over Russia and Europe
+    expect(t.matrix.source[pair(idx('Rotterdam'), idx('New York'), n)]).toBe('sea')
+  })
+
+  it('gives each pair its distance inside the ECAs: Rotterdam – New York crosses the North Sea and North American ECAs, Singapore – Yokohama none', async () => {
+    const ids = ['Rotterdam', 'New York', 'Singapore', 'Yokohama'].map(n => byName(n).id)
+    const t = (await shore.request('/api/tables', { method: 'POST', body: { name: 'ECA four', placeIds: ids } })).body
+    const n = t.places.length
+    const idx = (name: string) => t.places.findIndex((p: any) => p.name === name)
+    // Hand working (the seeded outlines, db/seeds/ecaZones.ts, approximate from memory of MARPOL Annex VI
+    // Appendix VII): the North Sea ECA runs from Rotterdam through the Dover Strait and the Channel to 5°W,
+    // about 130 + 250 = 380 nm. The great-circle track to New York meets the North American ECA's seaward
+    // side south-east of Newfoundland near 48°W, 45°N, then stays inside to New York (74°W, 40.7°N):
+    // about 26° of longitude at a mean latitude near 43° (26 × 60 × cos 43° ≈ 1,140 nm) plus the
+    // southing of about 4.5° (270 nm), ≈ 1,170 nm. So about 1,550 nm in all; allow 1,300 to 1,850.
+    const rn = t.matrix.ecaNm[pair(idx('Rotterdam'), idx('New York'), n)]
+    expect(rn).toBeGreaterThan(1300)
+    expect(rn).toBeLessThan(1850)
+    // Singapore – Yokohama runs through no ECA (none in the South China Sea or off Japan).
+    expect(t.matrix.ecaNm[pair(idx('Singapore'), idx('Yokohama'), n)]).toBe(0)
   })
 
   it('lets planners and masters read but not build, rebuild or delete (403)', async () => {
@@ -109,9 +199,18 @@ describe('distance tables', () => {
     const radius = await shore.request('/api/tables', { method: 'POST', body: { name: 'R', placeIds: [places[0].id, places[1].id], radiusNm: -1 } })
     expect(radius.status).toBe(400)
     expect((await shore.request('/api/tables/abc')).status).toBe(400)
+    const avoid = await shore.request('/api/tables', { method: 'POST', body: { name: 'A', placeIds: [places[0].id, places[1].id], avoid: ['atlantis'] } })
+    expect(avoid.status).toBe(400)
+    expect(avoid.body.message).toMatch(/avoid\.0: unknown passage "atlantis"/)
+    const twice = await shore.request('/api/tables', { method: 'POST', body: { name: 'A', placeIds: [places[0].id, places[1].id], avoid: ['suez', 'suez'] } })
+    expect(twice.status).toBe(400)
+    expect(twice.body.message).toMatch(/avoid/)
+    const notList = await shore.request('/api/tables', { method: 'POST', body: { name: 'A', placeIds: [places[0].id, places[1].id], avoid: 'suez' } })
+    expect(notList.status).toBe(400)
+    expect(notList.body.message).toMatch(/avoid/)
   })
 
-  it('exports CSV: place names as header, distances to one decimal, source marks and a key', async () => {
+  it('exports CSV: place names as header, distances to one decimal, source marks, ECA distances, passages and a key', async () => {
     const names = ['Cape of Good Hope offing', 'Fremantle pilot boarding ground', 'Rotterdam', 'New York']
     const made = await shore.request('/api/tables', { method: 'POST', body: { name: 'Export', placeIds: names.map(n => byName(n).id) } })
     const res = await shore.request(`/api/tables/${made.body.id}/export`)
@@ -121,11 +220,23 @@ describe('distance tables', () => {
     const header = lines[0]!.split(',')
     expect(header[0]).toBe('Distance (nm)')
     expect(header.slice(1).sort()).toEqual([...names].sort())
-    const row = lines.find(l => l.startsWith('Rotterdam,'))!.split(',')
-    const oracle = geodSolveNm(byName('Rotterdam'), byName('New York'))
-    expect(row[header.indexOf('New York')]).toBe(oracle.toFixed(1))
-    expect(lines).toContain('D,direct — not a sailing route')
-    expect(lines.some(l => l.startsWith('Source,'))).toBe(true)
+    const table = (await shore.request(`/api/tables/${made.body.id}`)).body
+    const n = table.places.length
+    const idx = (name: string) => table.places.findIndex((p: any) => p.name === name)
+    const rn = pair(idx('Rotterdam'), idx('New York'), n)
+    // Each grid starts at its title line; the Rotterdam row of each grid in turn: distance, source, ECA distance, passages.
+    const gridRow = (title: string) => {
+      const at = lines.findIndex(l => l.startsWith(`${title},`))
+      expect(at, title).toBeGreaterThanOrEqual(0)
+      return lines.slice(at).find(l => l.startsWith('Rotterdam,'))!.split(',')
+    }
+    const col = header.indexOf('New York')
+    expect(gridRow('Distance (nm)')[col]).toBe(table.matrix.distanceNm[rn].toFixed(1))
+    expect(gridRow('Source')[col]).toBe('S')
+    expect(gridRow('Inside ECAs (nm)')[col]).toBe(table.matrix.ecaNm[rn].toFixed(1))
+    expect(gridRow('Passages')[col]).toBe(table.matrix.via[rn].join(' '))
+    expect(lines).toContain('S,computed sea route')
+    expect(lines).toContain('dover,Dover Strait')
     expect(lines.some(l => /^P\d+,"approved plan: Cape of Good Hope – Fremantle, held at 40°S"$/.test(l))).toBe(true)
   })
 })

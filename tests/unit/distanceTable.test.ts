@@ -35,16 +35,27 @@ describe('distance table arithmetic', () => {
     expect(distanceNm[pairIndex(0, 2, 3)]).toBeGreaterThan(800)
   })
 
-  it('writes CSV with a header of place names, one decimal, marks and formula-safe names', () => {
+  it('writes CSV with a header of place names, one decimal, marks, ECA distances, passages and formula-safe names', () => {
     const csv = distanceTableCsv({
-      id: 1, name: 'T', status: 'ready', progress: 1, placeCount: 3, radiusNm: 30, builtAt: null, createdAt: '', error: null, places,
-      matrix: { distanceNm: [650, 840.04, 600.96], planId: [11, null, null], crossesLand: [null, false, true], plans: [{ id: 11, title: 'A, B' }], landStepNm: 20 },
+      id: 1, name: 'T', status: 'ready', progress: 1, placeCount: 3, radiusNm: 30, avoid: ['suez'], builtAt: null, createdAt: '', error: null, places,
+      matrix: {
+        distanceNm: [650, 840.04, 600.96], planId: [11, null, null], source: ['plan', 'sea', 'direct'], via: [null, ['dover', 'gibraltar'], null],
+        ecaNm: [12.34, 0, null], crossesLand: [null, null, true], plans: [{ id: 11, title: 'A, B' }],
+        passages: [{ id: 'dover', name: 'Dover Strait' }, { id: 'gibraltar', name: 'Strait of Gibraltar' }], landStepNm: 20,
+      },
     })
     const lines = csv.split('\r\n')
     expect(lines[0]).toBe(`Distance (nm),Alpha,Bravo,'=Charlie`)
     expect(lines[1]).toBe('Alpha,,650.0,840.0')
     expect(lines[3]).toBe(`'=Charlie,840.0,601.0,`)
-    expect(lines).toContain('Alpha,,P11,D')
+    expect(lines).toContain('Alpha,,P11,S')
+    expect(lines).toContain('Bravo,P11,,DL')
+    // Distance inside ECAs: one decimal, empty where the pair has none computed (direct).
+    expect(lines).toContain('Alpha,,12.3,0.0')
+    expect(lines).toContain('Bravo,12.3,,')
+    expect(lines).toContain('Alpha,,,dover gibraltar')
     expect(lines).toContain('P11,"approved plan: A, B"')
+    expect(lines).toContain('S,"computed sea route, avoiding suez"')
+    expect(lines).toContain('gibraltar,Strait of Gibraltar')
   })
 })

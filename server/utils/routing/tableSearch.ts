@@ -75,13 +75,14 @@ function joinPlace(g: SeaGraph, p: LatLon, clearanceNm: number, limitLat: number
 
 /**
  * Sea routes for every pair (i, j), i < j, of the places; `onPair` gets each one (null when no sea
- * route joins them), row by row. `onRow` is awaited after each origin, so a long build can yield
- * and write progress; it may return false to stop.
+ * route joins them), row by row, for the pairs `wanted` asks for. `onRow` is awaited after each
+ * origin, so a long build can yield and write progress; it may return false to stop.
  */
 export async function seaTable(
   g: SeaGraph, places: readonly LatLon[], opts: SeaRouteOptions,
   onPair: (i: number, j: number, route: TableSeaRoute | null) => void,
   onRow: (i: number) => Promise<boolean> | boolean = () => true,
+  wanted: (i: number, j: number) => boolean = () => true,
 ): Promise<boolean> {
   const q = prepareQuery(g, opts)
   try {
@@ -90,29 +91,30 @@ export async function seaTable(
     for (let i = 0; i < n - 1; i++) {
       const a = joined[i]
       if (!a) {
-        for (let j = i + 1; j < n; j++) onPair(i, j, null)
+        for (let j = i + 1; j < n; j++) if (wanted(i, j)) onPair(i, j, null)
       }
       else {
-        const wanted = new Set<number>()
-        for (let j = i + 1; j < n; j++) for (const s of joined[j]?.seeds ?? []) wanted.add(s.node)
-        const tree = dijkstraTree(g, a.seeds, q.model, wanted)
+        const targets = new Set<number>()
+        for (let j = i + 1; j < n; j++) if (wanted(i, j)) for (const s of joined[j]?.seeds ?? []) targets.add(s.node)
+        const tree = dijkstraTree(g, a.seeds, q.model, targets)
         // Read the whole row off the tree before anything else searches this graph.
         const paths: (number[] | null)[] = []
         for (let j = i + 1; j < n; j++) {
-          const b = joined[j]
+          const b = wanted(i, j) ? joined[j] : undefined
           let best = Infinity, bestNode = -1
           for (const s of b?.seeds ?? []) {
             if (tree.stamp[s.node] !== tree.gen) continue
             const c = tree.cost[s.node]! + s.costNm
             if (c < best) { best = c; bestNode = s.node }
           }
-          if (bestNode < 0) { paths.push(null); continue }
+          if (bestNode < 0) { paths.push(b ? null : []); continue }
           const nodes: number[] = []
           for (let v = bestNode; v >= 0; v = tree.pred[v]!) nodes.push(v)
           paths.push(nodes.reverse())
         }
         for (let j = i + 1; j < n; j++) {
-          const nodes = paths[j - i - 1]!
+          const nodes = paths[j - i - 1] ?? null
+          if (nodes && !nodes.length) continue // not wanted
           if (!nodes) { onPair(i, j, null); continue }
           const waypoints = routeThrough(g, q, a.end, joined[j]!.end, nodes)
           let distanceNm = 0
