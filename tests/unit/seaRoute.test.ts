@@ -83,6 +83,18 @@ describe('route ends', () => {
     expect(landPoints(r)).toEqual([])
   })
 
+  it.each([
+    // Harbour positions from memory: each lies behind narrows the graph's cells are too coarse for.
+    ['Trondheim', { lat: 63.44, lon: 10.4 }],
+    ['Oslo', { lat: 59.9, lon: 10.74 }],
+    ['Philadelphia', { lat: 39.93, lon: -75.14 }],
+  ] as const)('reaches %s behind its narrows, moved less than 3 nm', (_, port) => {
+    const r = seaRoute(graph, port, { lat: 40, lon: -40 })
+    expect(r.moved.from ?? 0).toBeLessThan(3)
+    expect(landPoints(r)).toEqual([])
+    expect(r.distanceNm).toBeGreaterThanOrEqual(r.geodesicNm)
+  })
+
   it('refuses a position more than 20 nm from navigable water, naming the end', () => {
     // Seville lies some 30 nm up the Guadalquivir from the sea at Sanlúcar (from memory).
     expect(() => seaRoute(graph, { lat: 37.38, lon: -5.99 }, { lat: 36, lon: -8 })).toThrow(EndError)

@@ -10,7 +10,7 @@ import type { GraphParams } from './graphBuild'
 import type { GraphArrays } from './seaGraph'
 
 /** Bump when the builder's output changes for the same inputs. */
-export const GRAPH_FORMAT = 'passagewright-sea-graph-2'
+export const GRAPH_FORMAT = 'passagewright-sea-graph-3'
 const MAGIC = 'PWSG'
 
 type Typed = Float64Array | Float32Array | Uint32Array | Uint8Array

@@ -7,7 +7,8 @@ import { G, geod } from '#shared/utils/engine/wgs84'
 import { normaliseLongitude } from '#shared/utils/position'
 import { PASSAGES } from '#shared/utils/routing/passages'
 import type { LandData } from '../land'
-import { coastDistanceNm, isRoutingLand } from './coast'
+import FlatQueue from 'flatqueue'
+import { chordCrossesLand, coastDistanceNm, isRoutingLand } from './coast'
 import { buildDistanceField } from './distanceField'
 import {
   DEFAULT_GRAPH_PARAMS, buildGridEdges, buildGridNodes, edgeLengthNm, localNm, nodeIndex, nodesWithin, packEdges, segmentCrossesLand,
@@ -141,6 +142,141 @@ function bridgeComponents(land: LandData, nodes: GridNodes, edges: EdgeList, gri
   return added
 }
 
+/** Channel search for water left apart: raster step (nm), margin round a component (nm), largest raster (cells). */
+const CHANNEL_STEP_NM = 0.2
+const CHANNEL_PAD_NM = 12
+const CHANNEL_MAX_CELLS = 400_000
+const CHANNEL_MIN_NODES = 3
+
+function components(n: number, edges: EdgeList): Int32Array {
+  const parent = Int32Array.from({ length: n }, (_, i) => i)
+  for (let k = 0; k < edges.from.length; k++) {
+    const a = root(parent, edges.from[k]!), b = root(parent, edges.to[k]!)
+    if (a !== b) parent[a] = b
+  }
+  return Int32Array.from({ length: n }, (_, i) => root(parent, i))
+}
+
+/**
+ * Water joined to the rest only by a channel too narrow or too bent for any graph chord (a fjord
+ * behind its narrows, a bay behind a bar): for each component outside the largest, a search over a
+ * fine raster of the water round it (0.2 nm cells, moves between cell centres clear of the
+ * coastline, dearer near the shore) finds the nearest node of another component; the channel is
+ * then laid as a chain of new nodes, each chord clear of land, and the two joined. Water the
+ * coastline closes stays apart: the search finds no way out.
+ */
+function channelBridges(land: LandData, nodes: GridNodes, edges: EdgeList): number {
+  const comp = components(nodes.lat.length, edges)
+  const members = new Map<number, number[]>()
+  comp.forEach((c, v) => { const m = members.get(c); if (m) m.push(v); else members.set(c, [v]) })
+  let main = -1, mainSize = 0
+  for (const [c, m] of members) if (m.length > mainSize) { main = c; mainSize = m.length }
+  const index = nodeIndex(nodes.lat, nodes.lon)
+  const merged = Int32Array.from({ length: nodes.lat.length }, (_, i) => i)
+  let added = 0
+  for (const [c, m] of members) {
+    if (c === main || m.length < CHANNEL_MIN_NODES) continue
+    let s = Infinity, nth = -Infinity, w = Infinity, e = -Infinity
+    for (const v of m) { s = Math.min(s, nodes.lat[v]!); nth = Math.max(nth, nodes.lat[v]!); w = Math.min(w, nodes.lon[v]!); e = Math.max(e, nodes.lon[v]!) }
+    if (e - w > 180) continue // across the 180° meridian: not searched
+    const cos = Math.cos((Math.min(80, Math.max(Math.abs(s), Math.abs(nth))) * Math.PI) / 180)
+    const dLat = CHANNEL_STEP_NM / 60, dLon = dLat / cos
+    s -= CHANNEL_PAD_NM / 60; nth += CHANNEL_PAD_NM / 60; w -= CHANNEL_PAD_NM / 60 / cos; e += CHANNEL_PAD_NM / 60 / cos
+    const rows = Math.ceil((nth - s) / dLat), cols = Math.ceil((e - w) / dLon)
+    if (rows * cols > CHANNEL_MAX_CELLS || w < -180 || e > 180) continue
+    const mine = root(merged, c)
+    const cellOf = (lat: number, lon: number) => {
+      const j = Math.floor((lat - s) / dLat), i = Math.floor((lon - w) / dLon)
+      return j >= 0 && j < rows && i >= 0 && i < cols ? j * cols + i : -1
+    }
+    const centre = (k: number): [number, number] => [s + (Math.floor(k / cols) + 0.5) * dLat, w + ((k % cols) + 0.5) * dLon]
+    // Cells holding a node of another component (after the bridges laid so far), and the start cells.
+    const goal = new Map<number, number>()
+    for (const v of nodesWithin(index, (s + nth) / 2, (w + e) / 2, Math.max((nth - s) * 60, (e - w) * 60 * cos))) {
+      if (root(merged, comp[v]!) === mine) continue
+      const k = cellOf(nodes.lat[v]!, nodes.lon[v]!)
+      if (k >= 0 && !goal.has(k)) goal.set(k, v)
+    }
+    if (!goal.size) continue
+    const water = new Int8Array(rows * cols) // 0 unknown, 1 water, -1 land
+    const isWater = (k: number) => {
+      if (!water[k]) { const [la, lo] = centre(k); water[k] = isRoutingLand(land, la, lo) ? -1 : 1 }
+      return water[k] === 1
+    }
+    const cost = new Float64Array(rows * cols).fill(Infinity), pred = new Int32Array(rows * cols).fill(-1), origin = new Int32Array(rows * cols).fill(-1)
+    const queue = new FlatQueue<number>()
+    for (const v of m) {
+      const k = cellOf(nodes.lat[v]!, nodes.lon[v]!)
+      if (k < 0 || !isWater(k)) continue
+      cost[k] = 0; origin[k] = v; queue.push(k, 0)
+    }
+    let reached = -1
+    while (queue.length) {
+      const d = queue.peekValue()!, u = queue.pop()!
+      if (d > cost[u]!) continue
+      if (goal.has(u)) { reached = u; break }
+      const [la, lo] = centre(u)
+      const ju = Math.floor(u / cols), iu = u % cols
+      for (let dj = -1; dj <= 1; dj++) {
+        for (let di = -1; di <= 1; di++) {
+          if (!dj && !di) continue
+          const j = ju + dj, i = iu + di
+          if (j < 0 || j >= rows || i < 0 || i >= cols) continue
+          const v = j * cols + i
+          if (!isWater(v)) continue
+          const [lb, lob] = centre(v)
+          const len = Math.hypot(dj * CHANNEL_STEP_NM, di * CHANNEL_STEP_NM)
+          const clear = coastDistanceNm(land, lb, lob, 1).nm
+          const nd = d + len * (1 + 1 / Math.max(0.05, clear))
+          if (nd >= cost[v]!) continue
+          if (chordCrossesLand(land, lo, la, lob, lb)) continue
+          cost[v] = nd; pred[v] = u; origin[v] = origin[u]!; queue.push(v, nd)
+        }
+      }
+    }
+    if (reached < 0) continue
+    const target = goal.get(reached)!
+    const path: [number, number][] = [[nodes.lat[target]!, nodes.lon[target]!]]
+    for (let k = reached; k >= 0; k = pred[k]!) path.push(centre(k))
+    let start = reached
+    while (pred[start]! >= 0) start = pred[start]!
+    const source = origin[start]!
+    path.push([nodes.lat[source]!, nodes.lon[source]!])
+    // Greedy: from each kept point the farthest point along the path whose chord is clear of land.
+    const kept = [0]
+    let ok = true
+    for (let i = 0; i < path.length - 1;) {
+      let best = -1
+      for (let j = i + 1; j < path.length; j++) {
+        const [la, lo] = path[i]!, [lb, lob] = path[j]!
+        if (segmentCrossesLand(land, la, lo, lb, lob, localNm(la, lo, lb, lob))) break
+        best = j
+      }
+      if (best < 0) { ok = false; break }
+      kept.push(best); i = best
+    }
+    if (!ok) continue
+    let prev = target
+    for (let q = 1; q < kept.length; q++) {
+      let v: number
+      if (q === kept.length - 1) v = source
+      else {
+        const [la, lo] = path[kept[q]!]!
+        v = nodes.lat.length
+        nodes.lat.push(la); nodes.lon.push(lo); nodes.size.push(CHANNEL_STEP_NM); nodes.clear.push(coastDistanceNm(land, la, lo, 50).nm)
+      }
+      const la = nodes.lat[prev]!, lo = nodes.lon[prev]!, lb = nodes.lat[v]!, lob = nodes.lon[v]!
+      const nm = localNm(la, lo, lb, lob)
+      edges.from.push(prev); edges.to.push(v); edges.passage.push(0); edges.lengthNm.push(edgeLengthNm(la, lo, lb, lob))
+      edges.clearNm.push(Math.min(nodes.clear[prev]!, nodes.clear[v]!, chordCoastNm(land, la, lo, lb, lob, nm)))
+      prev = v
+    }
+    merged[root(merged, comp[target]!)] = mine
+    added++
+  }
+  return added
+}
+
 function segmentsCross(a: number[], b: number[], c: number[], d: number[]): boolean {
   const o = (p: number[], q: number[], r: number[]) => (q[0]! - p[0]!) * (r[1]! - p[1]!) - (q[1]! - p[1]!) * (r[0]! - p[0]!)
   return (o(a, b, c) > 0) !== (o(a, b, d) > 0) && (o(c, d, a) > 0) !== (o(c, d, b) > 0)
@@ -199,9 +335,9 @@ export function buildSeaGraphArrays(land: LandData, params: GraphParams = DEFAUL
   const raster = buildClearanceRaster(field)
   const nodes = buildGridNodes(land, field, params)
   const edges = buildGridEdges(land, field, nodes, params)
+  bridgeComponents(land, nodes, edges, nodes.lat.length)
+  channelBridges(land, nodes, edges)
   const passageOf: number[] = nodes.lat.map(() => 0)
-  const gridCount = nodes.lat.length
-  bridgeComponents(land, nodes, edges, gridCount)
   addFairways(land, nodes, edges, passageOf)
   const n = nodes.lat.length
   const csr = packEdges(n, edges)
