@@ -5,13 +5,19 @@ import type { H3Event } from 'h3'
 // own session routes check revocation in server/plugins/sessionRevocation.ts.
 const OPEN = new Set(['POST /api/auth/login', 'GET /api/health'])
 const SESSION_COOKIE = 'nuxt-session'
+const SESSION_HEADER = `x-${SESSION_COOKIE}-session`
 
 export default defineEventHandler(async (event) => {
-  if (!getCookie(event, SESSION_COOKIE)) startUnsavedSession(event)
+  const sealed = getCookie(event, SESSION_COOKIE)
+  if (!sealed) startUnsavedSession(event)
+  // h3 reads a session header before the cookie: only a request without one restores from the cookie.
+  const cacheable = !!sealed && getRequestHeader(event, SESSION_HEADER) === undefined
+  const restored = cacheable && restoreSession(event, SESSION_COOKIE, sealed)
   if (!event.path.startsWith('/api/')) return
   const path = event.path.split('?')[0]!
   if (OPEN.has(`${event.method} ${path}`) || path === '/api/_auth/session') return
   const session = await getUserSession(event)
+  if (cacheable && !restored) rememberSession(event, SESSION_COOKIE, sealed)
   if (!session.user) throw createError({ statusCode: 401, statusMessage: 'Sign in to continue' })
   if (await isSessionRevoked(session.id!)) {
     await clearUserSession(event)

@@ -9,12 +9,15 @@ import type { LegZoneDistance } from '#shared/utils/zones/types'
  * null when the vessel has fewer than two fuel points (no curve to fit).
  */
 export async function fuelForPlan(companyId: number, vesselId: number, legs: readonly { speedKn: number, hours: number, distanceNm: number }[], legZones: readonly LegZoneDistance[][] = []): Promise<PlanFuel | null> {
-  const points = await loadFuelPoints(vesselId)
+  // Three small reads at once rather than one after another (this runs on every plan read).
+  const [points, { reserve, fuelPrices, currency }, grades] = await Promise.all([
+    loadFuelPoints(vesselId),
+    getCompanySettings(companyId),
+    useDb()('vessel_fuel_grades').where({ vessel_id: vesselId }).first('outside', 'inside_eca as insideEca'),
+  ])
   if (points.length < 2) return null
   const curve = fitFuelCurve(points)
-  const { reserve, fuelPrices, currency } = await getCompanySettings(companyId)
   const fuel = planFuel(curve, legs, reserve)
-  const grades = await useDb()('vessel_fuel_grades').where({ vessel_id: vesselId }).first('outside', 'inside_eca as insideEca')
   const byGrade = fuelByGrade(fuel.legTonnes, legs, legZones, fuel.reserveTonnes, grades ?? DEFAULT_FUEL_GRADES, fuelPrices ?? [])
   const speeds = points.map(p => p.speedKn)
   return { curve, reserve, ...fuel, byGrade, currency: currency ?? 'USD', dataSpeedKn: { min: Math.min(...speeds), max: Math.max(...speeds) } }

@@ -73,22 +73,25 @@ const VIEW_SQL = `select
   (select json_build_array(lat, lon) from waypoints where plan_id = :id order by seq limit 1) as first,
   (select json_build_array(lat, lon) from waypoints where plan_id = :id order by seq desc limit 1) as last,
   (select count(*)::int from waypoints where plan_id = :id) as count,
-  ${TRACK_MD5_SQL} as track_md5,
+  case when exists (select 1 from land_checks where plan_id = :id) then ${TRACK_MD5_SQL} end as track_md5,
   l.plan_version, l.engine, l.zone_signature, l.legs_json, l.totals_json, l.fuel_input_json
   from (select 1) one left join plan_legs l on l.plan_id = :id`
 
 /** GET /api/plans/:id as the JSON text it sends: legs read back as stored (see planLegs.ts), recomputed only when stale. */
 export async function getPlanViewJson(user: SessionUser, id: number): Promise<string> {
-  const plan = await findPlan(user, id)
-  const { rows: [r] } = await useDb().raw(VIEW_SQL, { id })
+  // The plan row (which scopes the request to the caller's company) and the rest of the view at once:
+  // for another company's plan the view's rows are read but never used.
+  const [plan, { rows: [r] }] = await Promise.all([findPlan(user, id), useDb().raw(VIEW_SQL, { id })])
   // Without a departure or arrival place, the time zone comes from the first or last waypoint's position.
   plan.departureTimeZone ??= r.first ? timeZoneAt(r.first[0], r.first[1]) : null
   plan.arrivalTimeZone ??= r.count > 1 ? timeZoneAt(r.last[0], r.last[1]) : null
   const legs: StoredLegs = (await storedLegsCurrent(plan, r))
     ? { legsJson: r.legs_json, totalsJson: r.totals_json, fuelInput: JSON.parse(r.fuel_input_json) as FuelInput }
     : await storeLegs(useDb(), plan, await loadWaypoints(id))
-  const fuel = await fuelForPlan(user.companyId, plan.vesselId, legs.fuelInput.legs, legs.fuelInput.zones)
-  const landCheck = await latestLandCheck(useDb(), id, r.track_md5)
+  const [fuel, landCheck] = await Promise.all([
+    fuelForPlan(user.companyId, plan.vesselId, legs.fuelInput.legs, legs.fuelInput.zones),
+    latestLandCheck(useDb(), id, r.track_md5 ?? undefined),
+  ])
   return `{"plan":${JSON.stringify(plan)},"waypoints":${r.waypoints},"legs":${legs.legsJson},"totals":${legs.totalsJson},"fuel":${JSON.stringify(fuel)},"events":${r.events},"landCheck":${JSON.stringify(landCheck)}}`
 }
 

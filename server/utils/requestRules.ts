@@ -77,11 +77,13 @@ export function readBodyWithin(req: IncomingMessage, limit: number, tooLarge: ()
 }
 
 const truthy = (v: unknown) => ['1', 'true', 'on', 'yes'].includes(String(v).toLowerCase())
+// The process's runtime config (environment read once at start), never useRuntimeConfig(event): that
+// copies the whole config and reads the environment for every key again, on every request.
 
 /** True when the request came over TLS, or through a trusted proxy (`NUXT_TRUST_PROXY=on`) that says it did. */
 export function isHttpsRequest(event: H3Event): boolean {
   if ((event.node.req.socket as { encrypted?: boolean }).encrypted) return true
-  if (!truthy(useRuntimeConfig(event).trustProxy)) return false
+  if (!truthy(useRuntimeConfig().trustProxy)) return false
   return (getRequestHeader(event, 'x-forwarded-proto') ?? '').split(',')[0]!.trim().toLowerCase() === 'https'
 }
 
@@ -95,12 +97,12 @@ export function isOwnOrigin(event: H3Event): boolean {
     const site = getRequestHeader(event, 'sec-fetch-site')
     return site === undefined || site === 'same-origin'
   }
-  const trusted = String(useRuntimeConfig(event).trustedOrigins || '').split(',').map(s => s.trim()).filter(Boolean)
+  const trusted = String(useRuntimeConfig().trustedOrigins || '').split(',').map(s => s.trim()).filter(Boolean)
   if (trusted.includes(origin)) return true
   let host: string
   try { host = new URL(origin).host }
   catch { return false }
-  const own = getRequestHost(event, { xForwardedHost: truthy(useRuntimeConfig(event).trustProxy) })
+  const own = getRequestHost(event, { xForwardedHost: truthy(useRuntimeConfig().trustProxy) })
   return origin !== 'null' && host.toLowerCase() === own.toLowerCase()
 }
 
