@@ -1,8 +1,9 @@
 import type { Knex } from 'knex'
 import type { SessionUser } from '#shared/types/auth'
 import type { FuelPoint } from '#shared/types/fuel'
-import type { CrewMember, VesselDetail, VesselUpdateInput } from '#shared/types/vessel'
+import type { CrewMember, VesselDetail, VesselFuelGrades, VesselUpdateInput } from '#shared/types/vessel'
 import { fitFuelCurve } from '#shared/utils/fuel'
+import { DEFAULT_FUEL_GRADES } from '#shared/utils/zones/fuelSplit'
 
 export async function listVessels(user: SessionUser) {
   const rows = await useDb()('vessels').leftJoin('users', 'users.id', 'vessels.master_user_id')
@@ -34,7 +35,9 @@ export async function getVessel(user: SessionUser, id: number): Promise<VesselDe
   const crew = await db('crew_members').where({ vessel_id: id }).orderBy('id').select('id', 'name', 'rank', 'email')
   const fuelPoints = await loadFuelPoints(id)
   const masters = await db('users').where({ company_id: user.companyId, role: 'master' }).orderBy('name').select('id', 'name')
-  return { ...row, serviceSpeedKn: Number(row.serviceSpeedKn), crew, fuelPoints, fuelCurve: fuelPoints.length >= 2 ? fitFuelCurve(fuelPoints) : null, masters }
+  const grades = await db('vessel_fuel_grades').where({ vessel_id: id }).first('outside', 'inside_eca as insideEca')
+  const fuelGrades = grades ? { outside: grades.outside, insideEca: grades.insideEca, stored: true } : { ...DEFAULT_FUEL_GRADES, stored: false }
+  return { ...row, serviceSpeedKn: Number(row.serviceSpeedKn), crew, fuelPoints, fuelCurve: fuelPoints.length >= 2 ? fitFuelCurve(fuelPoints) : null, fuelGrades, masters }
 }
 
 export async function updateVessel(user: SessionUser, id: number, input: VesselUpdateInput) {
@@ -69,6 +72,15 @@ export async function replaceFuelPoints(user: SessionUser, id: number, points: F
     await findVessel(user, id, trx)
     await trx('vessel_fuel_points').where({ vessel_id: id }).delete()
     await trx('vessel_fuel_points').insert(points.map(p => ({ vessel_id: id, speed_kn: p.speedKn, tonnes_per_day: p.tonnesPerDay })))
+  })
+  return getVessel(user, id)
+}
+
+/** Sets the grades the vessel burns outside and inside ECAs (the plan's fuel split by grade reads them). */
+export async function setFuelGrades(user: SessionUser, id: number, grades: VesselFuelGrades) {
+  await useDb().transaction(async (trx) => {
+    await findVessel(user, id, trx)
+    await trx('vessel_fuel_grades').insert({ vessel_id: id, outside: grades.outside, inside_eca: grades.insideEca }).onConflict('vessel_id').merge()
   })
   return getVessel(user, id)
 }

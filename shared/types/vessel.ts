@@ -2,6 +2,7 @@ import { z } from 'zod'
 import { imoNumberSchema } from './imo'
 import { emailSchema, idSchema, speedKnSchema } from './fields'
 import { fuelPointsSchema, type FuelPoint } from './fuel'
+import { fuelPriceSchema } from './company'
 import type { FuelCurve } from '../utils/fuel'
 
 /** Particulars an admin edits. */
@@ -25,6 +26,13 @@ export type CrewMember = z.infer<typeof crewMemberSchema>
 export const crewListSchema = z.object({ crew: z.array(crewMemberSchema).max(100, 'a crew list has at most 100 people') })
 export const vesselFuelSchema = z.object({ points: fuelPointsSchema })
 
+/** The fuel grades a vessel burns outside and inside emission control areas, named as the company's bunker prices name them. */
+export const vesselFuelGradesSchema = z.object({
+  outside: fuelPriceSchema.shape.grade,
+  insideEca: fuelPriceSchema.shape.grade,
+}).strict()
+export type VesselFuelGrades = z.infer<typeof vesselFuelGradesSchema>
+
 export interface VesselDetail {
   id: number
   name: string
@@ -37,6 +45,8 @@ export interface VesselDetail {
   fuelPoints: FuelPoint[]
   /** t/day = c·V^k fitted to the points; null with fewer than two. */
   fuelCurve: FuelCurve | null
+  /** The grades burnt outside and inside ECAs; `stored: false` when the vessel has none of its own (the defaults apply). */
+  fuelGrades: VesselFuelGrades & { stored: boolean }
   /** Masters of the company, for the assignment list. */
   masters: { id: number, name: string }[]
 }

@@ -33,6 +33,7 @@ const pages: Record<string, { path: () => string, expect: (who: DemoUser) => Exp
   'tables.vue': { path: () => '/tables', expect: everyone },
   'zones.vue': { path: () => '/zones', expect: everyone },
   'admin/users.vue': { path: () => '/admin/users', expect: onlyFor(['admin'], { status: 403, text: /Only an admin manages users/ }) },
+  'admin/settings.vue': { path: () => '/admin/settings', expect: onlyFor(['admin'], { status: 403, text: /Only an admin changes the company settings/ }) },
   'plans/new.vue': { path: () => '/plans/new', expect: onlyFor(editors, { status: 403, text: /Only planners and masters create plans/ }) },
   'plans/import.vue': { path: () => '/plans/import', expect: onlyFor(editors, { status: 403, text: /Only planners and masters import routes/ }) },
   'plans/[id].vue': { path: () => `/plans/${ids.plan}`, expect: ownCompany(/Plan not found/) },

@@ -91,6 +91,7 @@ export const RULES: Record<string, AccessRule> = {
   'GET /api/vessels/:id': { roles: ALL, record: 'vessel' },
   'PUT /api/vessels/:id': { roles: ADMIN, record: 'vessel', body: { name: 'Scope probe', imoNumber: '9074729', callSign: 'ABC1', serviceSpeedKn: 12, masterUserId: null } },
   'PUT /api/vessels/:id/crew': { roles: ADMIN, record: 'vessel', body: { crew: [{ name: 'Scope probe', rank: 'Cadet', email: 'probe@example.com' }] } },
+  'PUT /api/vessels/:id/fuel-grades': { roles: DESK, record: 'vessel', body: { outside: 'VLSFO', insideEca: 'MGO' } },
   'PUT /api/vessels/:id/fuel': { roles: DESK, record: 'vessel', body: { points: [{ speedKn: 10, tonnesPerDay: 20 }, { speedKn: 12, tonnesPerDay: 30 }] } },
 }
 
