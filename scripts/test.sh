@@ -27,11 +27,26 @@ trap cleanup EXIT INT TERM
 run_db migrate
 run_db seed
 ensure_sea_graph
-log "building the app for the tests"
-npx nuxt build >"$DATA/build-test.log" 2>&1 || { tail -60 "$DATA/build-test.log"; die "build failed"; }
-log "type check (vue-tsc --build --noEmit)"
+# The build runs beside the type check and lint (each mostly one core): the types come from
+# `nuxt prepare` in .nuxt, the build works in its own folder so it never rewrites what vue-tsc reads.
+since() { echo "$(( $(date +%s) - $1 )) s"; }
+t=$(date +%s)
+npx nuxt prepare >"$DATA/prepare-test.log" 2>&1 || { tail -30 "$DATA/prepare-test.log"; die "nuxt prepare failed"; }
+log "types prepared in $(since "$t"); building the app for the tests beside the type check and lint"
+t=$(date +%s)
+PW_BUILD_DIR="$DATA/build-test" npx nuxt build >"$DATA/build-test.log" 2>&1 &
+BUILD_PID=$!
+trap '[ -n "${BUILD_PID:-}" ] && kill "$BUILD_PID" 2>/dev/null; cleanup' EXIT
+s=$(date +%s)
 npx vue-tsc --build --noEmit
-log "lint (eslint, eslint.config.mjs)"
+log "type check (vue-tsc --build --noEmit): $(since "$s")"
+s=$(date +%s)
 npx eslint .
-log "tests: unit, nuxt, e2e"
+log "lint (eslint, eslint.config.mjs): $(since "$s")"
+wait "$BUILD_PID" || { BUILD_PID=""; tail -60 "$DATA/build-test.log"; die "build failed"; }
+BUILD_PID=""
+log "build done $(since "$t") after it started"
+log "tests: unit, components, nuxt, e2e"
+s=$(date +%s)
 npx vitest run "$@"
+log "tests: $(since "$s")"
