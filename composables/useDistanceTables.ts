@@ -19,9 +19,11 @@ export function useDistanceTableActions() {
 /** The open table; polled every second while it builds so the progress bar moves. */
 export function useDistanceTable(id: MaybeRefOrGetter<number | null>) {
   const key = computed(() => `table-${toValue(id) ?? 'none'}`)
+  // On the server the request's cookies go along, so a table opened by its address renders signed in.
+  const request = useRequestFetch()
   const result = useAsyncData(key, () => {
     const value = toValue(id)
-    return value ? $fetch<DistanceTableDetail>(`/api/tables/${value}`) : Promise.resolve(null)
+    return value ? request<DistanceTableDetail>(`/api/tables/${value}`) : Promise.resolve(null)
   }, { watch: [() => toValue(id)] })
   let timer: ReturnType<typeof setTimeout> | undefined
   const schedule = () => {

@@ -3,8 +3,12 @@ import { idSchema } from './fields'
 import { PASSAGE_IDS } from '../utils/routing/passages'
 
 export const DEFAULT_TABLE_RADIUS_NM = 30
-/** Tables up to this many places are built inside the request; larger ones go to the job queue. */
-export const IMMEDIATE_TABLE_PLACES = 50
+/**
+ * Tables up to this many places are built inside the request; larger ones go to the job queue.
+ * A sea table costs one search of the whole sea graph per place (some 0.3 s each on one core), so
+ * only small tables are worth a waiting request.
+ */
+export const IMMEDIATE_TABLE_PLACES = 12
 export const MAX_TABLE_PLACES = 300
 
 export const distanceTableCreateSchema = z.object({

@@ -1,25 +1,45 @@
 // Sea distances for distance tables: one Dijkstra per origin over the navigable graph, run until
 // every later place's joining nodes are settled, instead of one A* per pair. Each pair's graph path
-// is then smoothed into geodesic legs exactly as a single sea route is (routeThrough), so a table
-// cell and POST /api/routing/sea agree; the passages come from the path's fairway nodes and the
-// gates its edges cut, in the order the route meets them.
-import type { RouteWaypoint, SeaRouteOptions } from '#shared/types/routing'
+// is then pulled straight into geodesic legs by the router's own smoothing (smoothPath, the rules
+// of a single sea route), window by window: the path is cut at every WINDOW-th node counted from
+// its root, and since every node has one path back to the root in the shortest-path tree, the
+// smoothed window ending at a node is the same for every place beyond it and is smoothed once per
+// origin. The passages come from the path's fairway nodes and the gates its edges cut, in the order
+// the route meets them.
+import type { SeaRouteOptions } from '#shared/types/routing'
 import { PASSAGES } from '#shared/utils/routing/passages'
 import type { LatLon } from '#shared/types/geo'
+import { normaliseLongitude } from '#shared/utils/position'
 import { EndError, joinedEnd, rejoinedOnMainWater } from './ends'
 import type { RouteEnd } from './ends'
 import { dijkstraTree } from './search'
 import type { Seed } from './search'
-import { karneyNm, prepareQuery, routeThrough } from './seaRoute'
+import { karneyNm, prepareQuery } from './seaRoute'
+import type { RouteQuery } from './seaRoute'
 import type { SeaGraph } from './seaGraph'
+import { smoothPath } from './smooth'
+import type { PathPoint } from './smooth'
+
+/**
+ * Graph nodes per smoothing window. Against smoothing the whole path at once (routeThrough), 16
+ * lengthens Rotterdam – Singapore by 5 nm in 8,329 (0.06 %) and New York – Santos by 4 nm in 4,917,
+ * at a twentieth of the work; the graph path itself is 1–2 % longer than either.
+ */
+export const WINDOW = 16
+
+export interface TableWaypoint extends LatLon { method: 'geodesic' }
 
 /** One pair's sea route as a table keeps it. */
 export interface TableSeaRoute {
   distanceNm: number
   /** Passage ids in the order the route meets them. */
   via: string[]
-  waypoints: RouteWaypoint[]
+  /** From the origin's end (moved onto navigable water if need be) to the destination's. */
+  waypoints: TableWaypoint[]
 }
+
+/** A smoothed window: the waypoints after its first point up to its last, their length and passages. */
+interface Window { waypoints: TableWaypoint[], nm: number, via: number[] }
 
 const gatePassages = new WeakMap<SeaGraph, Map<number, number[]>>()
 
@@ -41,12 +61,12 @@ function edgeBetween(g: SeaGraph, u: number, v: number): number {
   return -1
 }
 
-/** Passage ids a graph path uses, in order: fairway nodes and gate-cutting edges. */
-export function pathPassages(g: SeaGraph, nodes: number[]): string[] {
+/** Passages (indexes) a graph path uses, in order: fairway nodes and gate-cutting edges. */
+function pathPassages(g: SeaGraph, nodes: readonly number[]): number[] {
   const gates = gatesOf(g)
   const seen = new Set<number>()
-  const out: string[] = []
-  const meet = (p: number) => { if (!seen.has(p)) { seen.add(p); out.push(PASSAGES[p]!.id) } }
+  const out: number[] = []
+  const meet = (p: number) => { if (!seen.has(p)) { seen.add(p); out.push(p) } }
   for (let i = 0; i < nodes.length; i++) {
     const u = nodes[i]!
     if (g.nodePassage[u]) meet(g.nodePassage[u]! - 1)
@@ -59,6 +79,36 @@ export function pathPassages(g: SeaGraph, nodes: number[]): string[] {
 }
 
 type Joined = { end: RouteEnd, seeds: Seed[] } | null
+
+/** Smooths the stretch of a path from `start` (an end, or the node before `nodes`) through the nodes to `stop` (an end) or the last node. */
+function smoothWindow(g: SeaGraph, q: RouteQuery, start: { point: RouteEnd | number }, nodes: readonly number[], stop: RouteEnd | null): Window {
+  const points: PathPoint[] = []
+  const clear: number[] = []
+  const nodePoint = (v: number): PathPoint => ({ lat: g.lat[v]!, lon: g.lon[v]!, fixed: g.nodePassage[v]! > 0 })
+  const first = start.point
+  const chain = typeof first === 'number' ? [first, ...nodes] : [...nodes]
+  if (typeof first !== 'number') {
+    points.push({ lat: first.lat, lon: first.lon, fixed: false })
+    clear.push(Math.min(first.clearNm, g.clearNm[chain[0]!]!))
+  }
+  for (let k = 0; k < chain.length; k++) {
+    points.push(nodePoint(chain[k]!))
+    if (k + 1 < chain.length) clear.push(g.edgeClearNm[edgeBetween(g, chain[k]!, chain[k + 1]!)] ?? 0)
+  }
+  if (stop) {
+    points.push({ lat: stop.lat, lon: stop.lon, fixed: false })
+    clear.push(Math.min(stop.clearNm, g.clearNm[chain[chain.length - 1]!]!))
+  }
+  const kept = smoothPath(points, { sight: g.sight, clearanceNm: q.clearanceNm, limitLat: q.limitLat, segmentClearNm: clear, crossesAvoided: q.crossesAvoided, areas: q.areas })
+  const waypoints: TableWaypoint[] = []
+  let nm = 0
+  for (let k = 1; k < kept.length; k++) {
+    const a = points[kept[k - 1]!]!, b = points[kept[k]!]!
+    nm += karneyNm(a, b)
+    waypoints.push({ lat: b.lat, lon: normaliseLongitude(b.lon), method: 'geodesic' })
+  }
+  return { waypoints, nm, via: pathPassages(g, chain) }
+}
 
 /** A place placed on navigable water and joined to the graph, on its main body of water when it can be; null when it cannot be placed. */
 function joinPlace(g: SeaGraph, p: LatLon, clearanceNm: number, limitLat: number): Joined {
@@ -112,14 +162,34 @@ export async function seaTable(
           for (let v = bestNode; v >= 0; v = tree.pred[v]!) nodes.push(v)
           paths.push(nodes.reverse())
         }
+        // Windows ending at a node, smoothed once for this origin: the key is the window's last node.
+        const windows = new Map<number, Window>()
         for (let j = i + 1; j < n; j++) {
           const nodes = paths[j - i - 1] ?? null
           if (nodes && !nodes.length) continue // not wanted
           if (!nodes) { onPair(i, j, null); continue }
-          const waypoints = routeThrough(g, q, a.end, joined[j]!.end, nodes)
+          const waypoints: TableWaypoint[] = [{ lat: a.end.lat, lon: normaliseLongitude(a.end.lon), method: 'geodesic' }]
+          const via: number[] = []
           let distanceNm = 0
-          for (let k = 0; k + 1 < waypoints.length; k++) distanceNm += karneyNm(waypoints[k]!, waypoints[k + 1]!)
-          onPair(i, j, { distanceNm, via: pathPassages(g, nodes), waypoints })
+          const take = (w: Window) => {
+            for (const p of w.waypoints) waypoints.push(p)
+            distanceNm += w.nm
+            for (const p of w.via) if (!via.includes(p)) via.push(p)
+          }
+          let from = 0
+          for (let at = WINDOW; at < nodes.length; at += WINDOW) {
+            const end = nodes[at]!
+            let w = windows.get(end)
+            if (!w) {
+              w = from === 0 ? smoothWindow(g, q, { point: a.end }, nodes.slice(0, at + 1), null) : smoothWindow(g, q, { point: nodes[from]! }, nodes.slice(from + 1, at + 1), null)
+              windows.set(end, w)
+            }
+            take(w)
+            from = at
+          }
+          const last = joined[j]!.end
+          take(from === 0 ? smoothWindow(g, q, { point: a.end }, nodes, last) : smoothWindow(g, q, { point: nodes[from]! }, nodes.slice(from + 1), last))
+          onPair(i, j, { distanceNm, via: via.map(p => PASSAGES[p]!.id), waypoints })
         }
       }
       if (!(await onRow(i))) return false
