@@ -36,10 +36,16 @@ describe('company settings page', () => {
     await form.getByText('currency is a three-letter code').waitFor()
     expect(await page.getByRole('button', { name: 'Save settings' }).isDisabled()).toBe(true)
     await page.getByLabel('Currency').fill('USD')
+    // Monitoring thresholds: 0–240 h late (shared/types/company.ts, monitoringSettingsSchema); blank keeps the default.
+    await page.getByLabel('Late after h').fill('500')
+    await form.getByText('must be from 0 to 240 h').waitFor()
+    expect(await page.getByRole('button', { name: 'Save settings' }).isDisabled()).toBe(true)
+    await page.getByLabel('Late after h').fill('')
     await page.getByRole('button', { name: 'Save settings' }).click()
     await page.getByRole('status').getByText('Settings saved').waitFor()
     const stored = await expectStatus(admin.request('/api/company/settings'), 200)
     expect(stored.fuelPrices).toContainEqual({ grade, pricePerTonne: 640 })
+    expect(stored.monitoring?.lateH).toBe(original.monitoring?.lateH)
 
     // Removing the new row (the last) leaves the others with their own values.
     await page.getByRole('button', { name: `Remove price row ${rows + 1}` }).click()
