@@ -26,6 +26,50 @@ export interface ChartLayerHandlers {
 
 export interface ChartMarkerState { editable: boolean, selected: number | null, names: string[] }
 
+/** Markers closer than this on screen are fanned out round their common place, each on a leader to its position. */
+const OVERLAP_PX = 18
+
+/**
+ * Screen offsets for markers that would hide each other at this zoom: each group of overlapping
+ * markers is spread on a circle round the first one's place (Leaflet moves the icon by its anchor,
+ * the marker's position stays the waypoint's).
+ */
+export function fanOffsets(at: Map<number, { x: number, y: number }>): Map<number, { dx: number, dy: number, r: number, deg: number }> {
+  const groups: { x: number, y: number, members: number[] }[] = []
+  for (const [i, p] of at) {
+    const g = groups.find(g => Math.hypot(g.x - p.x, g.y - p.y) < OVERLAP_PX)
+    if (g) g.members.push(i)
+    else groups.push({ x: p.x, y: p.y, members: [i] })
+  }
+  const out = new Map<number, { dx: number, dy: number, r: number, deg: number }>()
+  for (const g of groups) {
+    const n = g.members.length
+    if (n < 2) continue
+    const r = Math.max(14, (26 * n) / (2 * Math.PI))
+    g.members.forEach((i, k) => {
+      // The first to the west, the rest round clockwise: two side by side on the track.
+      const deg = 180 + (360 * k) / n
+      const p = at.get(i)!
+      // Offsets from each marker's own place to its slot round the group's centre.
+      const dx = g.x + r * Math.cos((deg * Math.PI) / 180) - p.x, dy = g.y + r * Math.sin((deg * Math.PI) / 180) - p.y
+      out.set(i, { dx, dy, r: Math.hypot(dx, dy), deg: (Math.atan2(-dy, -dx) * 180) / Math.PI })
+    })
+  }
+  return out
+}
+
+/** Leaflet's scale bar in nautical miles (its imperial bar, re-labelled; Leaflet 1.9 Control.Scale). */
+export function nauticalScale(L: typeof Leaflet): Leaflet.Control {
+  const Scale = (L.Control.Scale as unknown as { extend: (p: object) => new (o: Leaflet.Control.ScaleOptions) => Leaflet.Control }).extend({
+    _updateImperial(this: { _getRoundNum: (n: number) => number, _updateScale: (el: unknown, text: string, ratio: number) => void, _iScale: unknown }, maxMeters: number) {
+      const maxNm = maxMeters / 1852
+      const nm = this._getRoundNum(maxNm)
+      this._updateScale(this._iScale, `${nm} nm`, nm / maxNm)
+    },
+  })
+  return new Scale({ metric: false, imperial: true, position: 'bottomleft', maxWidth: 120 })
+}
+
 const ll = (points: LatLon[]) => points.map(p => [p.lat, p.lon] as [number, number])
 
 /**
@@ -74,7 +118,7 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
   const ellipse = L.polyline([], { pane: 'pwEllipse', color: C.ellipse, weight: 3, dashArray: '0.5 8', lineCap: 'round', interactive: false, className: 'pw-great-ellipse', smoothFactor }).addTo(map)
   const vertexLayer = L.layerGroup().addTo(map)
   const landLayer = L.layerGroup().addTo(map)
-  const markers = new Map<number, { marker: Leaflet.Marker, selected: boolean | null, name: string, lat: number, lon: number }>()
+  const markers = new Map<number, { marker: Leaflet.Marker, selected: boolean | null, name: string, lat: number, lon: number, fan: string }>()
   let vertexMarkers = new Map<string, Leaflet.Marker>()
   let dragging = -1
   let shown: { points: LatLon[], state: ChartMarkerState } | null = null
@@ -86,7 +130,7 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
     marker.on('drag', () => on.drag(i, at()))
     marker.on('dragend', () => { dragging = -1; on.dragEnd(i, at()) })
     marker.on('click', () => on.select(i))
-    return { marker: marker.addTo(map), selected: null as boolean | null, name: '', lat: Number.NaN, lon: Number.NaN }
+    return { marker: marker.addTo(map), selected: null as boolean | null, name: '', lat: Number.NaN, lon: Number.NaN, fan: '' }
   }
 
   /** Which waypoints get a marker: all of them, or in a long plan those in view, thinned to MAX_MARKERS. */
@@ -105,6 +149,7 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
     shown = { points, state }
     const wanted = new Set(markedIndices(points, state))
     for (const [i, m] of markers) if (!wanted.has(i)) { m.marker.remove(); markers.delete(i) }
+    const fans = fanOffsets(new Map([...wanted].map(i => [i, map.latLngToLayerPoint([points[i]!.lat, points[i]!.lon])])))
     for (const i of wanted) {
       const p = points[i]!
       let m = markers.get(i)
@@ -113,19 +158,28 @@ export function useChartLayers(L: typeof Leaflet, map: Leaflet.Map, on: ChartLay
       if (i !== dragging && (m.lat !== p.lat || m.lon !== p.lon)) { m.marker.setLatLng([p.lat, p.lon]); m.lat = p.lat; m.lon = p.lon }
       const selected = state.selected === i
       const name = state.names[i] ?? ''
-      if ((m.selected !== selected || m.name !== name) && i !== dragging) {
-        const cls = `pw-waypoint-marker${selected ? ' pw-waypoint-marker--selected' : ''}`
-        m.marker.setIcon(L.divIcon({ className: cls, html: `<span>${i + 1}</span>`, iconSize: [22, 22], iconAnchor: [11, 11] }))
+      const f = fans.get(i)
+      const fan = f ? `${Math.round(f.dx)},${Math.round(f.dy)}` : ''
+      if ((m.selected !== selected || m.name !== name || m.fan !== fan) && i !== dragging) {
+        const cls = `pw-waypoint-marker${selected ? ' pw-waypoint-marker--selected' : ''}${f ? ' pw-waypoint-marker--fanned' : ''}`
+        // A fanned marker keeps a leader line back to where the waypoint is.
+        const leader = f ? `<i class="pw-fan-leader" style="width:${Math.max(0, f.r - 11).toFixed(1)}px;transform:rotate(${f.deg.toFixed(1)}deg) translateX(11px)"></i>` : ''
+        m.marker.setIcon(L.divIcon({ className: cls, html: `${leader}<span>${i + 1}</span>`, iconSize: [22, 22], iconAnchor: [11 - Math.round(f?.dx ?? 0), 11 - Math.round(f?.dy ?? 0)] }))
         m.marker.getElement()?.setAttribute('title', `${i + 1}${name ? ` ${name}` : ''}`)
         m.marker.getElement()?.setAttribute('data-index', String(i))
+        if (f) m.marker.getElement()?.setAttribute('data-fanned', '')
+        else m.marker.getElement()?.removeAttribute('data-fanned')
         m.selected = selected
         m.name = name
+        m.fan = fan
       }
       if (m.marker.dragging && m.marker.dragging.enabled() !== state.editable) (state.editable ? m.marker.dragging.enable() : m.marker.dragging.disable())
     }
   }
   // Panning or zooming a long plan brings other waypoints into view.
   map.on('moveend', () => { if (shown && shown.points.length > MAX_MARKERS) updateMarkers(shown.points, shown.state) })
+  // Markers that overlap at one zoom stand apart at another: fan them anew.
+  map.on('zoomend', () => { if (shown) updateMarkers(shown.points, shown.state) })
 
   // Vertices are keyed by leg and position: unchanged legs keep their marker.
   function updateVertices(g: ChartGeometry) {

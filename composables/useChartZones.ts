@@ -44,7 +44,8 @@ export function useChartZones(L: typeof Leaflet, map: Leaflet.Map) {
       // Copies a turn of the globe either side, so a zone shows beside a track drawn across 180°.
       for (const shift of [-360, 0, 360]) {
         const latlngs = rings.map(poly => poly.map(ring => ring.map(([lat, lon]) => [lat, lon + shift] as [number, number])))
-        L.polygon(latlngs, { ...s, fillColor: s.color, interactive: true, bubblingMouseEvents: false, className: `pw-zone pw-zone--${z.kind}`, smoothFactor: 0.5 })
+        // Clicks go on to the map (placing waypoints on a zone); the name shows as a tooltip.
+        L.polygon(latlngs, { ...s, fillColor: s.color, interactive: true, bubblingMouseEvents: true, className: `pw-zone pw-zone--${z.kind}`, smoothFactor: 0.5 })
           .bindTooltip(`${z.name}${z.approximate ? ' (approximate outline)' : ''}`, { sticky: true })
           .addTo(group)
       }

@@ -1,6 +1,6 @@
 import { z } from 'zod'
 import { latLonSchema, legMethodSchema } from './geo'
-import { idSchema, versionSchema } from './fields'
+import { idSchema, latSchema, lonSchema, numberTextSchema, versionSchema } from './fields'
 import type { LatLon } from './geo'
 
 /** Shown with every land check result (the general caution is LAND_CHECK_CAUTION in shared/utils/cautions.ts). */
@@ -80,3 +80,6 @@ export interface StoredLandCheck extends LandCheckResult {
   current: boolean
   acknowledgements: LandCheckAck[]
 }
+
+/** GET /api/land-check/position: a position as query text. */
+export const landPositionQuerySchema = z.object({ lat: numberTextSchema(latSchema), lon: numberTextSchema(lonSchema) })

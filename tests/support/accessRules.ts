@@ -45,6 +45,7 @@ export const RULES: Record<string, AccessRule> = {
   'POST /api/geodesy/composite': { roles: ALL },
   'POST /api/geodesy/cross-track': { roles: ALL },
   'POST /api/land-check': { roles: ALL },
+  'GET /api/land-check/position': { roles: ALL, query: '?lat=1&lon=1' },
   'GET /api/routing/passages': { roles: ALL },
   'POST /api/routing/sea': { roles: ALL },
   'GET /api/timezone': { roles: ALL, query: '?lat=1&lon=1' },
