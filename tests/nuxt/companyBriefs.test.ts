@@ -47,10 +47,10 @@ describe('the company\'s sender', () => {
     const kestrel = await expectStatus<{ id: number, messageId: string }>(planner.request(`/api/plans/${kestrelPlan}/brief`, { method: 'POST' }), 202)
     const larkspur = await expectStatus<{ id: number, messageId: string }>(otherPlanner.request(`/api/plans/${larkspurPlan}/brief`, { method: 'POST' }), 202)
     const dir = process.env.PW_MAIL_DIR!
-    await expect.poll(() => mailsFor(dir, kestrel.id).length + mailsFor(dir, larkspur.id).length, { timeout: 60_000, interval: 500 }).toBe(2)
+    await expect.poll(() => mailsFor(dir, kestrel.id, kestrel.messageId).length + mailsFor(dir, larkspur.id, larkspur.messageId).length, { timeout: 60_000, interval: 500 }).toBe(2)
     // The demo senders (db/seeds/05_mail_senders.ts), as the mail fake's parser writes a From header.
-    expect(mailsFor(dir, kestrel.id)[0]!.from).toBe('"Kestrel Bight Shipping" <passages@kestrel-bight.example>')
-    expect(mailsFor(dir, larkspur.id)[0]!.from).toBe('"Larkspur Reach Carriers" <voyages@larkspur-reach.example>')
+    expect(mailsFor(dir, kestrel.id, kestrel.messageId)[0]!.from).toBe('"Kestrel Bight Shipping" <passages@kestrel-bight.example>')
+    expect(mailsFor(dir, larkspur.id, larkspur.messageId)[0]!.from).toBe('"Larkspur Reach Carriers" <voyages@larkspur-reach.example>')
     expect(larkspur.messageId).toMatch(/@larkspur-reach\.example>$/)
   })
 })

@@ -111,7 +111,7 @@ describe('delivery', () => {
   it('delivers a brief to the crew list with the vessel, totals, approval and cautions', async () => {
     const worker = await startWorker(mainSmtpUrl)
     const queued = (await planner.request(`/api/plans/${approvedPlanId}/brief`, { method: 'POST' })).body
-    const [mail] = await waitFor('the brief in the mail fake', () => { const m = mailsFor(mainMailDir, queued.id); return m.length ? m : false })
+    const [mail] = await waitFor('the brief in the mail fake', () => { const m = mailsFor(mainMailDir, queued.id, queued.messageId); return m.length ? m : false })
     await stop(worker)
 
     const view = (await planner.request(`/api/plans/${approvedPlanId}`)).body
@@ -187,7 +187,7 @@ describe('delivery', () => {
     const [a, b] = await Promise.all([startWorker(mainSmtpUrl), startWorker(mainSmtpUrl)])
     await waitFor('the raced message to be sent', async () => (await row(queued.id))?.state === 'sent')
     await waitForOutboxSettled([queued.id]) // all four jobs for the row done, none still held
-    expect(mailsFor(mainMailDir, queued.id)).toHaveLength(1)
+    expect(mailsFor(mainMailDir, queued.id, queued.messageId)).toHaveLength(1)
     expect((await row(queued.id)).attempts).toBe(1)
     await Promise.all([stop(a), stop(b)])
   })

@@ -53,7 +53,7 @@ describe('two instances behind one database', () => {
     const brief = await call(a.url, planner, `/api/plans/${id}/brief`, 'POST')
     expect([200, 201, 202]).toContain(brief.status)
     const outboxId = brief.body.id ?? brief.body.message?.id
-    const delivered = () => mailsFor(process.env.PW_MAIL_DIR!, outboxId)
+    const delivered = () => mailsFor(process.env.PW_MAIL_DIR!, outboxId, brief.body.messageId)
     await expect.poll(() => delivered().length, { timeout: 60_000, interval: 500 }).toBe(1)
     // Counted again once no job for the message is left for either worker.
     await waitForOutboxSettled([outboxId])
