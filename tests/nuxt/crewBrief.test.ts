@@ -1,9 +1,7 @@
 // Crew brief through the durable outbox. The test-utils server runs web-only (outbox worker off)
 // and queues briefs; the sending is done by server processes this file starts and kills itself,
 // so it can take the mail server away, restart the app mid-delivery and count what arrives.
-import { type ChildProcess, spawn } from 'node:child_process'
 import { mkdirSync, rmSync } from 'node:fs'
-import { createServer } from 'node:net'
 import { join } from 'node:path'
 import knex from 'knex'
 import PgBoss from 'pg-boss'
@@ -11,57 +9,15 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { PLANNING_CAUTION, LAND_CHECK_CAUTION } from '#shared/utils/cautions'
 import { type Api, loginAs, rootDir, startServer } from '../support/server'
 import { freePort } from '../support/instances'
+import { startMailFake, startWorker, stop, stopAll, waitFor } from '../support/processes'
 import { mailsFor } from '../support/mail'
 import { waitForOutboxSettled } from '../support/outbox'
 
 await startServer({ NUXT_OUTBOX_WORKER: 'off' })
 
-const outputDir = process.env.PW_OUTPUT_DIR || `${rootDir}.output`
 const mainMailDir = process.env.PW_MAIL_DIR!
 const mainSmtpUrl = process.env.NUXT_SMTP_URL || 'smtp://127.0.0.1:2526'
 const db = knex({ client: 'pg', connection: process.env.NUXT_DATABASE_URL })
-const children = new Set<ChildProcess>()
-
-async function waitFor<T>(what: string, probe: () => Promise<T | undefined | false> | T | undefined | false, timeoutMs = 60_000): Promise<T> {
-  const until = Date.now() + timeoutMs
-  for (;;) {
-    const value = await probe()
-    if (value) return value
-    if (Date.now() > until) throw new Error(`timed out waiting for ${what}`)
-    await new Promise(resolve => setTimeout(resolve, 250))
-  }
-}
-
-function start(command: string[], env: Record<string, string>) {
-  const child = spawn(process.execPath, command, { env: { ...process.env, ...env }, stdio: ['ignore', 'ignore', 'inherit'] })
-  children.add(child)
-  child.on('exit', () => children.delete(child))
-  return child
-}
-
-function stop(child: ChildProcess, signal: NodeJS.Signals = 'SIGTERM') {
-  return new Promise<void>((resolve) => {
-    if (child.exitCode !== null || child.signalCode !== null) return resolve()
-    child.once('exit', () => resolve())
-    child.kill(signal)
-  })
-}
-
-/** A second app process on its own port with the outbox worker on, sending to `smtpUrl`. */
-async function startWorker(smtpUrl: string) {
-  const port = await freePort()
-  const child = start([join(outputDir, 'server/index.mjs')], { PORT: String(port), HOST: '127.0.0.1', NUXT_SMTP_URL: smtpUrl, NUXT_OUTBOX_WORKER: 'on' })
-  await waitFor('the worker process to answer', () => fetch(`http://127.0.0.1:${port}/api/health`).then(r => r.ok, () => false))
-  return child
-}
-
-async function startMailFake(port: number, dir: string) {
-  const child = start(['scripts/mail-fake.mjs', '--port', String(port), '--dir', dir], {})
-  await waitFor('the SMTP fake to listen', () => new Promise<boolean>((resolve) => {
-    const socket = createServer().listen(port, '127.0.0.1', () => socket.close(() => resolve(false))).on('error', () => resolve(true))
-  }))
-  return child
-}
 
 const row = (id: number) => db('outbox_messages').where({ id }).first()
 
@@ -77,7 +33,7 @@ beforeAll(async () => {
 })
 
 afterAll(async () => {
-  await Promise.all([...children].map(c => stop(c, 'SIGKILL')))
+  await stopAll()
   // Leave the demo data as other test files expect it.
   const crewless = db('vessels').where({ imo_number: '9000003' }).select('id')
   await db('plans').whereIn('vessel_id', crewless).delete()

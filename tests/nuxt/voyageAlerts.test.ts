@@ -2,9 +2,7 @@
 // shore users one e-mail, kept through an SMTP outage and an app restart, and none again until a
 // later report clears the flag. The test-utils server runs web-only (outbox worker off); the sending
 // is done by server processes this file starts and kills.
-import { type ChildProcess, spawn } from 'node:child_process'
 import { mkdirSync, rmSync } from 'node:fs'
-import { createServer } from 'node:net'
 import { join } from 'node:path'
 import knex from 'knex'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
@@ -12,54 +10,13 @@ import { PLANNING_CAUTION } from '#shared/utils/cautions'
 import { expectStatus, makePlan } from '../support/records'
 import { type Api, loginAs, rootDir, startServer } from '../support/server'
 import { freePort } from '../support/instances'
+import { startMailFake, startWorker, stop, stopAll, waitFor } from '../support/processes'
 import { mailsFor } from '../support/mail'
 import { waitForOutboxSettled } from '../support/outbox'
 
 await startServer({ NUXT_OUTBOX_WORKER: 'off' })
 
-const outputDir = process.env.PW_OUTPUT_DIR || `${rootDir}.output`
 const db = knex({ client: 'pg', connection: process.env.NUXT_DATABASE_URL })
-const children = new Set<ChildProcess>()
-
-async function waitFor<T>(what: string, probe: () => Promise<T | undefined | false> | T | undefined | false, timeoutMs = 60_000): Promise<T> {
-  const until = Date.now() + timeoutMs
-  for (;;) {
-    const value = await probe()
-    if (value) return value
-    if (Date.now() > until) throw new Error(`timed out waiting for ${what}`)
-    await new Promise(resolve => setTimeout(resolve, 250))
-  }
-}
-
-function start(command: string[], env: Record<string, string>) {
-  const child = spawn(process.execPath, command, { env: { ...process.env, ...env }, stdio: ['ignore', 'ignore', 'inherit'] })
-  children.add(child)
-  child.on('exit', () => children.delete(child))
-  return child
-}
-
-function stop(child: ChildProcess, signal: NodeJS.Signals = 'SIGTERM') {
-  return new Promise<void>((resolve) => {
-    if (child.exitCode !== null || child.signalCode !== null) return resolve()
-    child.once('exit', () => resolve())
-    child.kill(signal)
-  })
-}
-
-async function startWorker(smtpUrl: string) {
-  const port = await freePort()
-  const child = start([join(outputDir, 'server/index.mjs')], { PORT: String(port), HOST: '127.0.0.1', NUXT_SMTP_URL: smtpUrl, NUXT_OUTBOX_WORKER: 'on' })
-  await waitFor('the worker process to answer', () => fetch(`http://127.0.0.1:${port}/api/health`).then(r => r.ok, () => false))
-  return child
-}
-
-async function startMailFake(port: number, dir: string) {
-  const child = start(['scripts/mail-fake.mjs', '--port', String(port), '--dir', dir], {})
-  await waitFor('the SMTP fake to listen', () => new Promise<boolean>((resolve) => {
-    const socket = createServer().listen(port, '127.0.0.1', () => socket.close(() => resolve(false))).on('error', () => resolve(true))
-  }))
-  return child
-}
 
 // An invented rhumb leg across the Tasman Sea, clear of land, sailed from 2026-11-24 06:00 UTC at 12 kn.
 const WAYPOINTS = [{ name: 'Tasman A', lat: -35, lon: 155, method: 'rhumb' }, { name: 'Tasman B', lat: -35, lon: 165, method: 'rhumb' }]
@@ -79,7 +36,7 @@ beforeAll(async () => {
 })
 
 afterAll(async () => {
-  await Promise.all([...children].map(c => stop(c, 'SIGKILL')))
+  await stopAll()
   await db.destroy()
 })
 
