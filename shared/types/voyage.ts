@@ -2,7 +2,7 @@
 import { z } from 'zod'
 import { dateTimeUtcSchema, MAX_ID, numberTextSchema } from './fields'
 import { angleSchema } from './place'
-import type { VoyageFlag } from '../utils/monitoring/workReport'
+import type { VoyageFlag, WorkedReport } from '../utils/monitoring/workReport'
 
 export const REPORT_REMARKS_MAX = 500
 export const reportSources = ['manual', 'import'] as const
@@ -37,7 +37,7 @@ export const reportParamsSchema = z.object({
 })
 
 /** One report worked out against the plan (the POST answer and each row of the list). */
-export interface VoyageReport {
+export interface VoyageReport extends WorkedReport {
   id: number
   timeUtc: string
   lat: number
@@ -47,21 +47,6 @@ export interface VoyageReport {
   remarks: string | null
   source: ReportSource
   createdByName: string
-  legIndex: number
-  /** Positive to starboard of the leg, nm. */
-  crossTrackNm: number
-  xteLimitNm: number
-  alongTrackNm: number
-  distanceToGoNm: number
-  speedMadeGoodKn: number | null
-  etaUtc: string | null
-  etaPlannedSpeedsUtc: string
-  plannedAlongTrackNm: number
-  aheadNm: number
-  delayH: number
-  fuelUsedT: number | null
-  fuelPlannedT: number | null
-  flags: VoyageFlag[]
 }
 
 export interface VoyageLeg {
