@@ -20,8 +20,8 @@ export interface StoredLegsRow { plan_version: number, engine: string, zone_sign
 /** Legs with their zone distances and totals for the given waypoints, stored for the plan's version. */
 export async function storeLegs(db: Db, plan: LegPlan, waypoints: readonly Waypoint[]): Promise<StoredLegs> {
   const table = computeLegTable(waypoints, plan.departureUtc, plan.speedKn)
-  const { signature } = await companyZones(plan.companyId)
-  const zones = await zonesForLegs(plan.companyId, table.legs)
+  const { signature, prepared } = await companyZones(plan.companyId, db)
+  const zones = zonesForLegs(prepared, table.legs)
   const stored: StoredLegs = {
     legsJson: JSON.stringify(table.legs.map((l, i) => ({ ...l, zones: zones.legs[i]! }))),
     totalsJson: JSON.stringify({ ...table.totals, zones: zones.totals }),

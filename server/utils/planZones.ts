@@ -3,11 +3,11 @@
 import type { LegZoneDistance } from '#shared/utils/zones/types'
 import type { PlanViewZones } from '#shared/types/planView'
 import { planZoneDistances, type ZoneTableLeg } from '#shared/utils/zones/legZones'
+import type { PreparedZones } from '#shared/utils/zones/prepare'
 
 export interface PlanZones { legs: LegZoneDistance[][], totals: PlanViewZones }
 
-export async function zonesForLegs(companyId: number, legs: readonly ZoneTableLeg[]): Promise<PlanZones> {
-  const { prepared } = await companyZones(companyId)
+export function zonesForLegs(prepared: PreparedZones, legs: readonly ZoneTableLeg[]): PlanZones {
   const { legs: perLeg, totals } = planZoneDistances(prepared, legs)
   return { legs: perLeg, totals: { ...totals, entersNoGo: totals.byZone.some(z => z.kind === 'no-go'), entersRisk: totals.byZone.some(z => z.kind === 'risk') } }
 }

@@ -43,12 +43,18 @@ export async function listPlans(user: SessionUser): Promise<PlanSummary[]> {
   return rows.map(toSummary)
 }
 
-/** The plan row in the user's company, or 404 (another company's plan does not exist for them). */
-export async function findPlan(user: SessionUser, id: number, db: Knex | Knex.Transaction = useDb()): Promise<PlanDetail> {
-  const row = await db('plans').join('vessels', 'vessels.id', 'plans.vessel_id')
+/**
+ * The plan row in the user's company, or 404 (another company's plan does not exist for them).
+ * With `lock` (inside a transaction) the plan row is locked for a write without waiting: PostgreSQL
+ * answers 55P03 at once when another write holds it.
+ */
+export async function findPlan(user: SessionUser, id: number, db: Knex | Knex.Transaction = useDb(), { lock = false } = {}): Promise<PlanDetail> {
+  const query = db('plans').join('vessels', 'vessels.id', 'plans.vessel_id')
     .leftJoin('places as dep', 'dep.id', 'plans.departure_place_id').leftJoin('places as arr', 'arr.id', 'plans.arrival_place_id')
     .leftJoin('users as approver', 'approver.id', 'plans.approved_by').leftJoin('users as creator', 'creator.id', 'plans.created_by')
-    .where({ 'plans.id': id, 'plans.company_id': user.companyId }).first(detailColumns)
+    .where({ 'plans.id': id, 'plans.company_id': user.companyId })
+  if (lock) query.forNoKeyUpdate('plans').noWait()
+  const row = await query.first(detailColumns)
   if (!row) notFound('Plan')
   return { ...toSummary(row), approvedAt: iso(row.approvedAt), vesselServiceSpeedKn: row.vesselServiceSpeedKn == null ? null : Number(row.vesselServiceSpeedKn) } as PlanDetail
 }
@@ -168,16 +174,43 @@ function assertEditable(plan: PlanDetail) {
     throw createError({ statusCode: 409, statusMessage: `This plan is ${plan.status}; only a draft can be edited${plan.status === 'approved' ? ' (start a revision to change it)' : ''}` })
 }
 
+const staleVersion = (plan: PlanDetail) =>
+  createError({ statusCode: 409, statusMessage: 'The plan was changed by someone else since you loaded it', data: { currentVersion: plan.version } })
+
 /** Bumps the version only if the caller saw the current one: the optimistic lock every write goes through. */
 async function bumpVersion(trx: Knex.Transaction, plan: PlanDetail, expected: number, extra: Record<string, unknown> = {}) {
   const updated = await trx('plans').where({ id: plan.id, version: expected }).update({ version: expected + 1, updated_at: trx.fn.now(), ...extra })
-  if (updated === 0) throw createError({ statusCode: 409, statusMessage: 'The plan was changed by someone else since you loaded it', data: { currentVersion: plan.version } })
+  if (updated === 0) throw staleVersion(plan)
+}
+
+const LOCK_NOT_AVAILABLE = '55P03'
+
+/**
+ * An edit of a plan's draft, as one transaction on the plan's locked row. Racing writes must not
+ * hold the pool's connections while they wait for the winner: a version already stale is refused
+ * from a plain read before any transaction starts, and a write that finds the row taken by another
+ * one is refused at once (409, without a version: nothing was saved yet, the draft may be sent again).
+ */
+async function editDraft(user: SessionUser, id: number, version: number, write: (trx: Knex.Transaction, plan: PlanDetail) => Promise<void>) {
+  const seen = await findPlan(user, id)
+  assertEditable(seen)
+  if (seen.version !== version) throw staleVersion(seen)
+  try {
+    await useDb().transaction(async (trx) => {
+      const plan = await findPlan(user, id, trx, { lock: true })
+      assertEditable(plan)
+      await write(trx, plan)
+    })
+  }
+  catch (error) {
+    if ((error as { code?: string }).code === LOCK_NOT_AVAILABLE)
+      throw createError({ statusCode: 409, statusMessage: 'Someone else is saving this plan at this moment; reload it and try again' })
+    throw error
+  }
 }
 
 export async function saveWaypoints(user: SessionUser, id: number, version: number, waypoints: Waypoint[]) {
-  await useDb().transaction(async (trx) => {
-    const plan = await findPlan(user, id, trx)
-    assertEditable(plan)
+  await editDraft(user, id, version, async (trx, plan) => {
     await bumpVersion(trx, plan, version, plan.status === 'returned' ? { status: 'draft' } : {})
     // Editing a returned plan takes it back to draft: a sign-off step, so it goes in the history.
     if (plan.status === 'returned') await recordEvent(trx, id, user, 'reopened', 'returned', 'draft')
@@ -187,9 +220,7 @@ export async function saveWaypoints(user: SessionUser, id: number, version: numb
 }
 
 export async function updatePlanHeader(user: SessionUser, id: number, input: PlanHeaderInput) {
-  await useDb().transaction(async (trx) => {
-    const plan = await findPlan(user, id, trx)
-    assertEditable(plan)
+  await editDraft(user, id, input.version, async (trx, plan) => {
     await endPlaces(user, input, trx)
     await bumpVersion(trx, plan, input.version, {
       title: input.title, departure_utc: input.departureUtc, speed_kn: input.speedKn, limit_lat: input.limitLat ?? null,

@@ -92,9 +92,10 @@ const prepared = new Map<number, CachedZones>()
 /**
  * The company's zones prepared for the engine. Each instance keeps them while the company's
  * zones are unchanged (one small query of ids and update times decides), so plans read cheaply.
+ * Inside a transaction pass it as `db`: a transaction that took a second connection from the pool
+ * while holding a row lock could wait for ever on the requests queued behind that lock.
  */
-export async function companyZones(companyId: number): Promise<CachedZones> {
-  const db = useDb()
+export async function companyZones(companyId: number, db: Knex | Knex.Transaction = useDb()): Promise<CachedZones> {
   const stamps = await db('zones').where({ company_id: companyId }).orderBy('id').select('id', db.raw(`extract(epoch from updated_at)::text as t`))
   const signature = stamps.map((s: any) => `${s.id}:${s.t}`).join(',')
   const hit = prepared.get(companyId)
