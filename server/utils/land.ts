@@ -318,11 +318,10 @@ function closestApproach(d: LandData, points: LatLon[]): { point: LatLon, coast:
  * by nearest coastline edge in a local equirectangular frame per point (good to about 1 % within
  * a few hundred miles), then the reported distance is the WGS84 geodesic to that coast point.
  */
-export function checkTrack(points: LatLon[], clearanceNm: number): TrackCheck {
+export function checkTrack(points: LatLon[], clearanceNm: number, d: LandData = landData()): TrackCheck {
   if (points.length === 0) throw new Error('checkTrack needs at least one point')
-  const d = landData()
   const start = points[0]!
-  if (isLand(start.lat, start.lon)) {
+  if (isLandIn(d, start.lat, normaliseLongitude(start.lon))) {
     const { coast } = closestApproach(d, [start])
     const firstLandPoint = { lat: start.lat, lon: normaliseLongitude(start.lon), index: 0 }
     return { crossesLand: true, firstLandPoint, closestApproachNm: 0, closestCoastPoint: coast, withinClearance: true }
@@ -336,10 +335,10 @@ export function checkTrack(points: LatLon[], clearanceNm: number): TrackCheck {
   return { crossesLand: false, closestApproachNm, closestCoastPoint: coast, withinClearance: closestApproachNm < clearanceNm }
 }
 
-/** Land check per leg, each densified at ≤ 2 nm by the navigation engine. */
-export function checkLegs(legs: LegToCheck[], clearanceNm: number, stepNm = MAX_STEP_NM): LegCheck[] {
+/** Land check per leg, each densified at ≤ 2 nm by the navigation engine (against the 1:50m land unless another is given). */
+export function checkLegs(legs: LegToCheck[], clearanceNm: number, stepNm = MAX_STEP_NM, d: LandData = landData()): LegCheck[] {
   const step = Math.min(stepNm, MAX_STEP_NM)
-  return legs.map((leg, index) => ({ index, ...checkTrack(densifyLeg(leg.from, leg.to, leg.method, step), clearanceNm) }))
+  return legs.map((leg, index) => ({ index, ...checkTrack(densifyLeg(leg.from, leg.to, leg.method, step), clearanceNm, d) }))
 }
 
 /** Sampling step of the distance tables' land pass: chords this far apart depart from the geodesic by well under a mile. */
@@ -362,8 +361,7 @@ export function geodesicCrossesLand(lat1: number, lon1: number, lat2: number, lo
  * crossed from the sea, or the first point when that is ashore) and where it is afloat again (null
  * when the track ends ashore). The same segment/edge intersections as checkTrack, all of them.
  */
-export function landCrossings(points: LatLon[]): LandCrossing[] {
-  const d = landData()
+export function landCrossings(points: LatLon[], d: LandData = landData()): LandCrossing[] {
   const out: LandCrossing[] = []
   const start = points[0]
   if (!start) return out

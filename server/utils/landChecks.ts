@@ -7,7 +7,9 @@ import type { LegMethod } from '#shared/types/geo'
 import { isFlaggedLeg, LAND_CHECK_RESULT_CAUTION, type LandCheckAck, type LandCheckAckInput, type LandCheckLeg, type PlanLandCheckInput, type StoredLandCheck } from '#shared/types/landCheck'
 import { densifyLeg } from '#shared/utils/track'
 import { passageOfLeg } from '#shared/utils/routing/passageLegs'
-import { checkLegs, landCrossings } from './land'
+import { checkLegs, landCrossings, landData } from './land'
+import type { LandData } from './land'
+import { useSeaGraph } from './routing/graphStore'
 
 /** Densifying step of the land check, nm (what checkLegs uses at most). */
 const STEP_NM = 2
@@ -15,13 +17,23 @@ const STEP_NM = 2
 interface TrackPoint { lat: number, lon: number, method?: LegMethod | null }
 
 /**
+ * The coastline the land check judges by: the sea router's (Natural Earth 1:10m, loaded with its
+ * graph), so a route the router suggests, whose ends it places on 1:10m water, is never flagged by
+ * the check for crossing the coarser 1:50m coast near a port.
+ */
+export async function landCheckCoast(): Promise<LandData> {
+  return (await useSeaGraph()).land
+}
+
+/**
  * The land check of a track, leg by leg, with every stretch over land of the legs that cross it.
  * A leg following a declared passage's fairway (within its corridor) is reported as through that
- * passage instead: the coarse coastline closes canals and narrow straits.
+ * passage instead: the coastline closes canals and narrow straits. The server checks against the
+ * router's coastline (landCheckCoast); without one given, the 1:50m land.
  */
-export function checkTrackLegs(waypoints: readonly TrackPoint[], clearanceNm: number): LandCheckLeg[] {
+export function checkTrackLegs(waypoints: readonly TrackPoint[], clearanceNm: number, land: LandData = landData()): LandCheckLeg[] {
   const legs = waypoints.slice(1).map((to, i) => ({ from: waypoints[i]!, to, method: to.method ?? 'rhumb' }))
-  return checkLegs(legs, clearanceNm, STEP_NM).map((leg) => {
+  return checkLegs(legs, clearanceNm, STEP_NM, land).map((leg) => {
     const { from, to, method } = legs[leg.index]!
     const passage = passageOfLeg(from, to, method)
     const crossesLand = !passage && leg.crossesLand
@@ -29,7 +41,7 @@ export function checkTrackLegs(waypoints: readonly TrackPoint[], clearanceNm: nu
       index: leg.index,
       crossesLand,
       firstLandPoint: crossesLand && leg.firstLandPoint ? { lat: leg.firstLandPoint.lat, lon: leg.firstLandPoint.lon } : null,
-      crossings: crossesLand ? landCrossings(densifyLeg(from, to, method, STEP_NM)) : [],
+      crossings: crossesLand ? landCrossings(densifyLeg(from, to, method, STEP_NM), land) : [],
       closestApproachNm: leg.closestApproachNm,
       closestCoastPoint: leg.closestCoastPoint,
       withinClearance: !passage && leg.withinClearance,
@@ -59,7 +71,7 @@ async function lockPlan(trx: Knex.Transaction, planId: number): Promise<number> 
 
 function summary(legs: LandCheckLeg[], clearanceNm: number): string {
   const flagged = legs.filter(isFlaggedLeg)
-  if (!flagged.length) return `Land check: no leg crosses land or passes within ${clearanceNm} nm of the coarse coastline.`
+  if (!flagged.length) return `Land check: no leg crosses land or passes within ${clearanceNm} nm of the coastline (1:10m).`
   const crossing = flagged.filter(l => l.crossesLand).map(l => l.index + 1)
   const near = flagged.filter(l => !l.crossesLand).map(l => l.index + 1)
   const parts = [
@@ -71,6 +83,7 @@ function summary(legs: LandCheckLeg[], clearanceNm: number): string {
 
 /** Checks the plan's saved track and keeps the result; the caller must have seen the current version. */
 export async function runPlanLandCheck(user: SessionUser, id: number, input: PlanLandCheckInput): Promise<StoredLandCheck> {
+  const land = await landCheckCoast()
   await useDb().transaction(async (trx) => {
     const plan = await findPlan(user, id, trx)
     assertNotApproved(plan.status)
@@ -79,7 +92,7 @@ export async function runPlanLandCheck(user: SessionUser, id: number, input: Pla
       throw createError({ statusCode: 409, statusMessage: 'The plan was changed by someone else since you loaded it', data: { currentVersion: version } })
     const waypoints = await loadWaypoints(id, trx)
     if (waypoints.length < 2) throw createError({ statusCode: 409, statusMessage: 'A land check needs at least two saved waypoints' })
-    const legs = checkTrackLegs(waypoints, input.clearanceNm)
+    const legs = checkTrackLegs(waypoints, input.clearanceNm, land)
     await trx('land_checks').insert({
       plan_id: id, plan_version: version, track_md5: await trackMd5(trx, id), clearance_nm: input.clearanceNm,
       flagged_legs: legs.filter(isFlaggedLeg).length, legs_json: JSON.stringify(legs), user_id: user.id, user_name: user.name,

@@ -4,7 +4,7 @@ import { idSchema, latSchema, lonSchema, numberTextSchema, versionSchema } from 
 import type { LatLon } from './geo'
 
 /** Shown with every land check result (the general caution is LAND_CHECK_CAUTION in shared/utils/cautions.ts). */
-export const LAND_CHECK_RESULT_CAUTION = 'Coastline data is coarse (Natural Earth 1:50m): a clear land check does not mean a safe track; it misses islands, reefs and harbours.'
+export const LAND_CHECK_RESULT_CAUTION = 'Coastline data is coarse (Natural Earth 1:10m, the sea router\'s): a clear land check does not mean a safe track; it misses small islands, reefs and harbour works.'
 
 /** Longest track (sum of legs) one land check accepts, in nm: several times round the world. */
 export const LAND_CHECK_MAX_TRACK_NM = 100_000

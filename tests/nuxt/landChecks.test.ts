@@ -8,8 +8,9 @@ import { expectStatus, makePlan, NORTH_SEA_WAYPOINTS } from '../support/records'
 
 await startServer()
 
-// Along 40.5°N from off Tarragona to off Vlorë (over Sardinia, the mainland and Salento: three
-// stretches over land), then west into the Strait of Otranto, 20 nm or more from either shore.
+// Along 40.5°N from off Tarragona to off Vlorë (over Sardinia, the mainland to Taranto, the spit
+// across Taranto's harbour entrance and Salento: four stretches over the 1:10m land the check uses,
+// where the 1:50m coastline closes the entrance and gives three), then west into the Strait of Otranto, 20 nm or more from either shore.
 const MED = [
   { name: 'Off Tarragona', lat: 40.5, lon: 2, method: 'rhumb' },
   { name: 'Off Vlore', lat: 40.5, lon: 19, method: 'rhumb' },
@@ -37,7 +38,7 @@ describe('land check of a plan', () => {
     checkId = kept.id
     expect(kept.legs).toHaveLength(2)
     expect(kept.legs[0].crossesLand).toBe(true)
-    expect(kept.legs[0].crossings).toHaveLength(3)
+    expect(kept.legs[0].crossings).toHaveLength(4)
     expect(kept.legs[1].crossesLand).toBe(false)
     expect(kept.legs[1].withinClearance).toBe(false)
     expect(kept).toMatchObject({ flaggedLegs: 1, clearanceNm: 5, current: true, planVersion: version, acknowledgements: [] })
@@ -47,7 +48,7 @@ describe('land check of a plan', () => {
     const v = await view(id)
     expect(v.landCheck.id).toBe(checkId)
     expect(v.landCheck.current).toBe(true)
-    expect(v.landCheck.legs[0].crossings).toHaveLength(3)
+    expect(v.landCheck.legs[0].crossings).toHaveLength(4)
     // Running the check changes nothing in the plan: its version stays.
     expect(v.plan.version).toBe(version)
     expect(v.events.at(-1)).toMatchObject({ kind: 'land_checked' })
@@ -125,7 +126,7 @@ describe('land check of an approved plan', () => {
 describe('land check of an unsaved track', () => {
   it('answers every stretch over land without keeping anything', async () => {
     const res = await expectStatus(planner.request('/api/land-check', { method: 'POST', body: { waypoints: MED, clearanceNm: 5 } }), 200)
-    expect(res.legs[0].crossings).toHaveLength(3)
+    expect(res.legs[0].crossings).toHaveLength(4)
     expect(res.id).toBeUndefined()
   })
 })

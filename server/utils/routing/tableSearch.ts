@@ -1,10 +1,9 @@
-// Sea distances for distance tables: one Dijkstra per origin over the navigable graph, run until
-// every later place's joining nodes are settled, instead of one A* per pair. Each pair's graph path
-// is then pulled straight into geodesic legs by the router's own smoothing (smoothPath, the rules
-// of a single sea route), window by window: the path is cut at every WINDOW-th node counted from
-// its root, and since every node has one path back to the root in the shortest-path tree, the
-// smoothed window ending at a node is the same for every place beyond it and is smoothed once per
-// origin. The passages come from the path's fairway nodes and the gates its edges cut, in the order
+// Sea distances for distance tables: one Dijkstra per origin over the navigable graph costed once
+// for the table (tableGraph.ts), run until every later place's joining nodes are settled, instead
+// of one A* per pair. Each pair's graph path is then pulled straight into geodesic legs by the
+// router's own smoothing (smoothPath, the rules of a single sea route), window by window: the path
+// is cut at nodes chosen by their number alone, so a stretch of water between two cut nodes is
+// smoothed once for the whole table and reused by every pair whose path runs through it. The passages come from the path's fairway nodes and the gates its edges cut, in the order
 // the route meets them.
 import type { SeaRouteOptions } from '#shared/types/routing'
 import { PASSAGES } from '#shared/utils/routing/passages'
@@ -12,8 +11,11 @@ import type { LatLon } from '#shared/types/geo'
 import { normaliseLongitude } from '#shared/utils/position'
 import { EndError, joinedEnd, rejoinedOnMainWater } from './ends'
 import type { RouteEnd } from './ends'
-import { dijkstraTree } from './search'
 import type { Seed } from './search'
+import { tableGraph } from './tableGraph'
+import type { FlatSeeds, TableGraph } from './tableGraph'
+import { RowSearches } from './tableWorkers'
+import type { RowRequest } from './tableWorkers'
 import { karneyNm, prepareQuery } from './seaRoute'
 import type { RouteQuery } from './seaRoute'
 import type { SeaGraph } from './seaGraph'
@@ -21,11 +23,17 @@ import { smoothPath } from './smooth'
 import type { PathPoint } from './smooth'
 
 /**
- * Graph nodes per smoothing window. Against smoothing the whole path at once (routeThrough), 16
- * lengthens Rotterdam – Singapore by 5 nm in 8,329 (0.06 %) and New York – Santos by 4 nm in 4,917,
- * at a twentieth of the work; the graph path itself is 1–2 % longer than either.
+ * The path is cut into smoothing windows at the nodes `isCut` picks (about one node in 16, chosen by
+ * the node's number alone, at least MIN_GAP nodes apart and from either end), so the same stretch of
+ * water is cut at the same nodes whichever origin's tree it lies in, and its window is smoothed once
+ * for the whole table. Against smoothing the whole path at once (routeThrough), windows of about 16
+ * nodes lengthen a route by well under 0.5 % (tests/unit/seaTable.test.ts); the graph path itself is
+ * 1–2 % longer than either.
  */
-export const WINDOW = 16
+const MIN_GAP = 6
+export function isCut(v: number): boolean {
+  return Math.imul(v + 1, 0x9E3779B1) >>> 28 === 0
+}
 
 export interface TableWaypoint extends LatLon { method: 'geodesic' }
 
@@ -76,6 +84,19 @@ function pathPassages(g: SeaGraph, nodes: readonly number[]): number[] {
     }
   }
   return out
+}
+
+const lastCosted = new WeakMap<SeaGraph, { key: string, tg: TableGraph }>()
+
+/** The table graph of a query; the last one without areas is kept for the next table of the same settings. */
+function costedGraph(g: SeaGraph, q: RouteQuery): TableGraph {
+  const plain = !q.areas.any && !q.areas.blockedEdges.length && !q.model.nodeFactor
+  const key = JSON.stringify([q.clearanceNm, q.limitLat, [...q.avoid].sort()])
+  const hit = lastCosted.get(g)
+  if (plain && hit?.key === key) return hit.tg
+  const tg = tableGraph(g, q.model)
+  if (plain) lastCosted.set(g, { key, tg })
+  return tg
 }
 
 type Joined = { end: RouteEnd, seeds: Seed[] } | null
@@ -135,35 +156,37 @@ export async function seaTable(
   wanted: (i: number, j: number) => boolean = () => true,
 ): Promise<boolean> {
   const q = prepareQuery(g, opts)
+  let rows: RowSearches | undefined
   try {
     const joined = places.map(p => joinPlace(g, p, q.clearanceNm, q.limitLat))
     const n = places.length
+    const flat = (seeds: Seed[]): FlatSeeds => ({ nodes: seeds.map(s => s.node), costs: seeds.map(s => s.costNm) })
+    const requests: (RowRequest | null)[] = joined.map((a, i) => (a
+      ? { sources: flat(a.seeds), targets: joined.slice(i + 1).map((b, k) => (b && wanted(i, i + 1 + k) ? flat(b.seeds) : null)) }
+      : null))
+    if (n) requests[n - 1] = null
+    rows = new RowSearches(costedGraph(g, q), requests)
+    const N = g.nodeCount
+    // Windows between two cut nodes (and from a cut node to a place's end) smoothed once for the whole table: the path
+    // between them is the same in most origins' trees; the stored nodes are compared before a window is reused.
+    const shared = new Map<number, { nodes: number[], w: Window }>()
+    const sharedWindow = (nodes: number[], from: number, to: number, key: number, make: () => Window): Window => {
+      const hit = shared.get(key)
+      if (hit && hit.nodes.length === to - from + 1 && hit.nodes.every((v, k) => v === nodes[from + k])) return hit.w
+      const w = make()
+      shared.set(key, { nodes: nodes.slice(from, to + 1), w })
+      return w
+    }
     for (let i = 0; i < n - 1; i++) {
       const a = joined[i]
       if (!a) {
         for (let j = i + 1; j < n; j++) if (wanted(i, j)) onPair(i, j, null)
       }
       else {
-        const targets = new Set<number>()
-        for (let j = i + 1; j < n; j++) if (wanted(i, j)) for (const s of joined[j]?.seeds ?? []) targets.add(s.node)
-        const tree = dijkstraTree(g, a.seeds, q.model, targets)
-        // Read the whole row off the tree before anything else searches this graph.
-        const paths: (number[] | null)[] = []
-        for (let j = i + 1; j < n; j++) {
-          const b = wanted(i, j) ? joined[j] : undefined
-          let best = Infinity, bestNode = -1
-          for (const s of b?.seeds ?? []) {
-            if (tree.stamp[s.node] !== tree.gen) continue
-            const c = tree.cost[s.node]! + s.costNm
-            if (c < best) { best = c; bestNode = s.node }
-          }
-          if (bestNode < 0) { paths.push(b ? null : []); continue }
-          const nodes: number[] = []
-          for (let v = bestNode; v >= 0; v = tree.pred[v]!) nodes.push(v)
-          paths.push(nodes.reverse())
-        }
-        // Windows ending at a node, smoothed once for this origin: the key is the window's last node.
-        const windows = new Map<number, Window>()
+        const row = await rows.next(i)
+        const paths = (row ?? []).map(p => (p ? Array.from(p) : null))
+        // The origin's first window (its end to the path's first cut node) is shared by every place of this row beyond that node.
+        const firstWindows = new Map<number, Window>()
         for (let j = i + 1; j < n; j++) {
           const nodes = paths[j - i - 1] ?? null
           if (nodes && !nodes.length) continue // not wanted
@@ -176,19 +199,22 @@ export async function seaTable(
             distanceNm += w.nm
             for (const p of w.via) if (!via.includes(p)) via.push(p)
           }
-          let from = 0
-          for (let at = WINDOW; at < nodes.length; at += WINDOW) {
+          const last = joined[j]!.end
+          let from = -1
+          for (let at = MIN_GAP; at < nodes.length - MIN_GAP; at++) {
+            if (at - from < MIN_GAP || !isCut(nodes[at]!)) continue
             const end = nodes[at]!
-            let w = windows.get(end)
-            if (!w) {
-              w = from === 0 ? smoothWindow(g, q, { point: a.end }, nodes.slice(0, at + 1), null) : smoothWindow(g, q, { point: nodes[from]! }, nodes.slice(from + 1, at + 1), null)
-              windows.set(end, w)
+            let w: Window | undefined
+            if (from < 0) {
+              w = firstWindows.get(end)
+              if (!w) { w = smoothWindow(g, q, { point: a.end }, nodes.slice(0, at + 1), null); firstWindows.set(end, w) }
             }
+            else w = sharedWindow(nodes, from, at, nodes[from]! * N + end, () => smoothWindow(g, q, { point: nodes[from]! }, nodes.slice(from + 1, at + 1), null))
             take(w)
             from = at
           }
-          const last = joined[j]!.end
-          take(from === 0 ? smoothWindow(g, q, { point: a.end }, nodes, last) : smoothWindow(g, q, { point: nodes[from]! }, nodes.slice(from + 1), last))
+          if (from < 0) take(smoothWindow(g, q, { point: a.end }, nodes, last))
+          else take(sharedWindow(nodes, from, nodes.length - 1, -(nodes[from]! * n + j) - 1, () => smoothWindow(g, q, { point: nodes[from]! }, nodes.slice(from + 1), last)))
           onPair(i, j, { distanceNm, via: via.map(p => PASSAGES[p]!.id), waypoints })
         }
       }
@@ -196,5 +222,8 @@ export async function seaTable(
     }
     return true
   }
-  finally { q.release() }
+  finally {
+    rows?.close()
+    q.release()
+  }
 }
