@@ -144,8 +144,13 @@ for (let i = 0; i < ORIGINS; i++) {
   const wanted = new Set(seeds.slice(i + 1).flat().map(s => s.node))
   let t = performance.now()
   const old = dijkstraTree(graph, seeds[i]!, query.model, wanted)
+  // The farthest later place's cost: the least over its joining nodes of the node's cost and the joining leg's.
   let far = 0
-  for (const v of wanted) if (old.stamp[v] === old.gen && old.cost[v]! > far) far = old.cost[v]!
+  for (const t of seeds.slice(i + 1)) {
+    let best = Infinity
+    for (const s of t) if (old.stamp[s.node] === old.gen && old.cost[s.node]! + s.costNm < best) best = old.cost[s.node]! + s.costNm
+    if (best < Infinity && best > far) far = best
+  }
   oldSum += far
   oldMs += performance.now() - t
   t = performance.now()
@@ -154,12 +159,17 @@ for (let i = 0; i < ORIGINS; i++) {
   newMs += performance.now() - t
   // The farthest joining node's cost, summed along its path with the table graph's edge costs.
   far = 0
-  for (const p of paths) {
-    if (!p || !p.length) continue
-    let c = seeds[i]!.find(s => s.node === p[0])!.costNm
-    for (let k = 1; k < p.length; k++) for (let e = tg.offsets[p[k - 1]!]!; e < tg.offsets[p[k - 1]! + 1]!; e++) if (tg.targets[e] === p[k]) { c += tg.cost[e]!; break }
+  paths.forEach((p, k) => {
+    if (!p || !p.length) return
+    let c = Math.min(...seeds[i]!.filter(s => s.node === p[0]).map(s => s.costNm))
+    for (let m = 1; m < p.length; m++) {
+      let e = Infinity
+      for (let x = tg.offsets[p[m - 1]!]!; x < tg.offsets[p[m - 1]! + 1]!; x++) if (tg.targets[x] === p[m]) e = Math.min(e, tg.cost[x]!)
+      c += e
+    }
+    c += Math.min(...seeds[i + 1 + k]!.filter(s => s.node === p[p.length - 1]).map(s => s.costNm))
     if (c > far) far = c
-  }
+  })
   newSum += far
 }
 query.release()

@@ -58,6 +58,9 @@ const CASES: Through[] = [
   { id: 'malacca', from: { lat: 4.0, lon: 99.5 }, to: { lat: 1.3, lon: 103.5 }, round: r => expect(minLat(r)).toBeLessThan(-5) },
   // Atlantic to Pacific entrance of the Strait of Magellan; without it round Cape Horn (55°59′S) or through Le Maire.
   { id: 'magellan', from: { lat: -52.5, lon: -68.3 }, to: { lat: -52.6, lon: -75.2 }, round: r => expect(minLat(r)).toBeLessThan(-54.8) },
+  // The Gulf of Mexico off Galveston to Barbours Cut, and the St. Lawrence estuary below Québec to Montréal: no other way in.
+  { id: 'houston', from: { lat: 29.1, lon: -94.5 }, to: { lat: 29.7, lon: -95.0 }, round: 'none' },
+  { id: 'st-lawrence', from: { lat: 47.3, lon: -70.2 }, to: { lat: 45.56, lon: -73.52 }, round: 'none' },
   // Arafura Sea to the Coral Sea; without Torres round New Guinea (north of the equator's 1°S) or Tasmania.
   { id: 'torres', from: { lat: -10.0, lon: 140.5 }, to: { lat: -10.0, lon: 144.5 }, round: r => expect(minLat(r) < -39 || maxLat(r) > -1.5).toBe(true) },
 ]

@@ -20,11 +20,12 @@ import { karneyNm, prepareQuery } from './seaRoute'
 import type { RouteQuery } from './seaRoute'
 import type { SeaGraph } from './seaGraph'
 import { smoothPath } from './smooth'
+import { legClear } from './visibility'
 import type { PathPoint } from './smooth'
 
 /**
- * The path is cut into smoothing windows at the nodes `isCut` picks (about one node in 16, chosen by
- * the node's number alone, at least MIN_GAP nodes apart and from either end), so the same stretch of
+ * The path is cut into smoothing windows at the nodes `isCut` picks (about one node in 16 of those
+ * near the coast, chosen by the node's number alone, at least MIN_GAP nodes apart and from either end), so the same stretch of
  * water is cut at the same nodes whichever origin's tree it lies in, and its window is smoothed once
  * for the whole table. Against smoothing the whole path at once (routeThrough), windows of about 16
  * nodes lengthen a route by well under 0.5 % (tests/unit/seaTable.test.ts); the graph path itself is
@@ -34,6 +35,13 @@ const MIN_GAP = 6
 export function isCut(v: number): boolean {
   return Math.imul(v + 1, 0x9E3779B1) >>> 28 === 0
 }
+/**
+ * Offshore the cells are up to 2° wide, and a cut at such a node could pull a route some tens of nm
+ * off its line: a cut point this far from the coast where the route turns by more than
+ * CUT_TURN_DEG is dropped afterwards when the leg past it is clear.
+ */
+const OFFSHORE_CUT_NM = 15
+const CUT_TURN_DEG = 3
 
 export interface TableWaypoint extends LatLon { method: 'geodesic' }
 
@@ -98,6 +106,49 @@ function costedGraph(g: SeaGraph, q: RouteQuery): TableGraph {
   if (plain) lastCosted.set(g, { key, tg })
   return tg
 }
+
+/** Planar turn (degrees) of a route at b, on the local frame of b. */
+function turnDeg(a: LatLon, b: LatLon, c: LatLon): number {
+  const k = Math.cos((b.lat * Math.PI) / 180)
+  const b1 = Math.atan2(normaliseLongitude(b.lon - a.lon) * k, b.lat - a.lat), b2 = Math.atan2(normaliseLongitude(c.lon - b.lon) * k, c.lat - b.lat)
+  let d = Math.abs(b2 - b1) * 180 / Math.PI
+  if (d > 180) d = 360 - d
+  return d
+}
+
+/** Drops the offshore cut points (indexes into waypoints, ascending) where the route turns and the leg past them is clear; returns the new distance. */
+/** Whether a leg between two waypoints is clear, by the waypoints (shared by every pair whose windows they come from). */
+type LegCache = Map<TableWaypoint, Map<TableWaypoint, boolean>>
+
+function dropOffshoreCuts(g: SeaGraph, q: RouteQuery, waypoints: TableWaypoint[], cuts: number[], distanceNm: number, cache: LegCache): number {
+  const drop = new Set<number>()
+  for (const c of cuts) {
+    let p = c - 1
+    while (drop.has(p)) p--
+    const from = waypoints[p]!, b = waypoints[c]!, next = waypoints[c + 1]
+    if (!next || turnDeg(from, b, next) < CUT_TURN_DEG) continue
+    let known = cache.get(from)
+    if (!known) { known = new Map(); cache.set(from, known) }
+    let clear = known.get(next)
+    if (clear === undefined) {
+      clear = !q.crossesAvoided(from.lat, from.lon, next.lat, next.lon)
+        && legClear(g.sight, from.lat, from.lon, next.lat, next.lon, Math.max(0, q.clearanceNm - CUT_TOLERANCE_NM), q.limitLat)
+      known.set(next, clear)
+    }
+    if (!clear) continue
+    distanceNm += karneyNm(from, next) - karneyNm(from, b) - karneyNm(b, next)
+    drop.add(c)
+  }
+  if (drop.size) {
+    let k = 0
+    for (let m = 0; m < waypoints.length; m++) if (!drop.has(m)) waypoints[k++] = waypoints[m]!
+    waypoints.length = k
+  }
+  return distanceNm
+}
+
+/** A dropped cut's leg may come this much closer to the coast than the clearance asked for, as in smoothing. */
+const CUT_TOLERANCE_NM = 0.5
 
 type Joined = { end: RouteEnd, seeds: Seed[] } | null
 
@@ -170,6 +221,7 @@ export async function seaTable(
     // Windows between two cut nodes (and from a cut node to a place's end) smoothed once for the whole table: the path
     // between them is the same in most origins' trees; the stored nodes are compared before a window is reused.
     const shared = new Map<number, { nodes: number[], w: Window }>()
+    const legCache: LegCache = new Map()
     const sharedWindow = (nodes: number[], from: number, to: number, key: number, make: () => Window): Window => {
       const hit = shared.get(key)
       if (hit && hit.nodes.length === to - from + 1 && hit.nodes.every((v, k) => v === nodes[from + k])) return hit.w
@@ -187,11 +239,12 @@ export async function seaTable(
         const paths = (row ?? []).map(p => (p ? Array.from(p) : null))
         // The origin's first window (its end to the path's first cut node) is shared by every place of this row beyond that node.
         const firstWindows = new Map<number, Window>()
+        const origin: TableWaypoint = { lat: a.end.lat, lon: normaliseLongitude(a.end.lon), method: 'geodesic' }
         for (let j = i + 1; j < n; j++) {
           const nodes = paths[j - i - 1] ?? null
           if (nodes && !nodes.length) continue // not wanted
           if (!nodes) { onPair(i, j, null); continue }
-          const waypoints: TableWaypoint[] = [{ lat: a.end.lat, lon: normaliseLongitude(a.end.lon), method: 'geodesic' }]
+          const waypoints: TableWaypoint[] = [origin]
           const via: number[] = []
           let distanceNm = 0
           const take = (w: Window) => {
@@ -199,6 +252,8 @@ export async function seaTable(
             distanceNm += w.nm
             for (const p of w.via) if (!via.includes(p)) via.push(p)
           }
+          // Waypoints at offshore cut nodes, by their index in waypoints.
+          const offshoreCuts: number[] = []
           const last = joined[j]!.end
           let from = -1
           for (let at = MIN_GAP; at < nodes.length - MIN_GAP; at++) {
@@ -211,10 +266,12 @@ export async function seaTable(
             }
             else w = sharedWindow(nodes, from, at, nodes[from]! * N + end, () => smoothWindow(g, q, { point: nodes[from]! }, nodes.slice(from + 1, at + 1), null))
             take(w)
+            if (g.clearNm[end]! >= OFFSHORE_CUT_NM && !g.nodePassage[end]) offshoreCuts.push(waypoints.length - 1)
             from = at
           }
           if (from < 0) take(smoothWindow(g, q, { point: a.end }, nodes, last))
           else take(sharedWindow(nodes, from, nodes.length - 1, -(nodes[from]! * n + j) - 1, () => smoothWindow(g, q, { point: nodes[from]! }, nodes.slice(from + 1), last)))
+          if (offshoreCuts.length && !q.areas.any) distanceNm = dropOffshoreCuts(g, q, waypoints, offshoreCuts, distanceNm, legCache)
           onPair(i, j, { distanceNm, via: via.map(p => PASSAGES[p]!.id), waypoints })
         }
       }

@@ -83,6 +83,18 @@ export const PASSAGES: readonly Passage[] = [
     gate: [[-52.3, -69.6], [-52.8, -69.6]],
     source: 'Fairway from memory (Primera and Segunda Angostura, Cabo Froward, Paso Inglés, Long Reach), then set to the middle of the channel on the 1:10m coastline; gate from memory',
   },
+  {
+    id: 'houston', name: 'Houston Ship Channel (Galveston Bay)', kind: 'canal',
+    fairway: [[29.3, -94.65], [29.34, -94.72], [29.45, -94.84], [29.55, -94.93], [29.62, -94.98], [29.7, -95.0]],
+    gate: [[29.45, -94.95], [29.55, -94.81]],
+    source: 'Fairway from memory (sea buoy, Bolivar Roads, the dredged channel up Galveston Bay to Morgan\'s Point and Barbours Cut); the 1:10m coastline closes the bay',
+  },
+  {
+    id: 'st-lawrence', name: 'St. Lawrence (Québec – Montréal)', kind: 'strait',
+    fairway: [[46.81, -71.2], [46.75, -71.29], [46.69, -71.88], [46.55, -72.1], [46.34, -72.53], [46.15, -72.95], [46.04, -73.12], [45.9, -73.22], [45.8, -73.3], [45.65, -73.47], [45.56, -73.52]],
+    gate: [[46.4, -72.6], [46.28, -72.45]],
+    source: 'Ship channel from memory (Québec, Portneuf, Trois-Rivières, Lac Saint-Pierre, Sorel, Contrecœur, Montréal); the 1:10m coastline closes the river above Québec',
+  },
   { id: 'torres', name: 'Torres Strait', kind: 'strait', gate: [[-11.0, 142.3], [-9.0, 142.3]], source: 'Gate from memory' },
   { id: 'dover', name: 'Dover Strait', kind: 'strait', gate: [[51.18, 1.3], [50.84, 1.65]], source: 'Gate from memory' },
   { id: 'gibraltar', name: 'Strait of Gibraltar', kind: 'strait', gate: [[36.1, -5.6], [35.8, -5.6]], source: 'Gate from memory' },
