@@ -4,6 +4,8 @@
 // a build of main beside this one: BENCH_OUTPUTS=/tmp/main-output,.output. BENCH_PROFILE=DIR runs
 // each server under `node --cpu-prof` and leaves its profile in DIR (`node scripts/profile-top.mjs DIR`
 // lists the top functions). BENCH_ONLY=REGEX measures only the routes whose name matches, e.g. BENCH_ONLY=plans.
+// Every request sends the Accept-Encoding a browser sends (Chromium's), so the plan route answers compressed
+// as it does to the workspace; BENCH_ACCEPT_ENCODING=identity measures the uncompressed answers instead.
 import { spawn } from 'node:child_process'
 import { readFileSync } from 'node:fs'
 import autocannon from 'autocannon'
@@ -13,6 +15,7 @@ const base = `http://127.0.0.1:${PORT}`
 const DURATION = Number(process.env.BENCH_SECONDS || 8)
 const outputs = (process.env.BENCH_OUTPUTS || '.output').split(',').map(s => s.trim())
 const profileDir = process.env.BENCH_PROFILE
+const acceptEncoding = process.env.BENCH_ACCEPT_ENCODING || 'gzip, deflate, br, zstd'
 
 function startServer(output) {
   const args = [...(profileDir ? ['--cpu-prof', '--cpu-prof-dir', profileDir] : []), `${output}/server/index.mjs`]
@@ -40,10 +43,10 @@ async function json(path, cookie, method = 'GET', body) {
 
 function load(title, path, cookie, opts = {}) {
   return new Promise((resolve, reject) => {
-    autocannon({ url: `${base}${path}`, connections: 16, duration: DURATION, headers: { cookie, 'content-type': 'application/json' }, ...opts }, (err, result) => {
+    autocannon({ url: `${base}${path}`, connections: 16, duration: DURATION, headers: { cookie, 'content-type': 'application/json', 'accept-encoding': acceptEncoding }, ...opts }, (err, result) => {
       if (err) return reject(err)
       if (result.non2xx) return reject(new Error(`${title}: ${result.non2xx} responses were not 2xx`))
-      resolve({ title, rps: result.requests.average, p50: result.latency.p50, p99: result.latency.p99 })
+      resolve({ title, rps: result.requests.average, p50: result.latency.p50, p99: result.latency.p99, kB: result.throughput.average / result.requests.average / 1024 })
     })
   })
 }
@@ -62,7 +65,7 @@ async function createPlan(cookie, count) {
 }
 
 const inverseBody = JSON.stringify({ from: { lat: 35.44, lon: 139.64 }, to: { lat: 48.49, lon: -124.8 } })
-console.log(`Passagewright API benchmark — autocannon, 16 connections, ${DURATION} s per run, loopback`)
+console.log(`Passagewright API benchmark — autocannon, 16 connections, ${DURATION} s per run, loopback; Accept-Encoding: ${acceptEncoding} (as a browser sends)`)
 for (const output of outputs) {
   const server = startServer(output)
   await waitForServer()
@@ -87,7 +90,7 @@ for (const output of outputs) {
     const spread = r.p99 / Math.max(r.p50, 1)
     console.log('GET /api/auth/me'.padEnd(38), trivial.rps.toFixed(0).padStart(9), String(trivial.p50).padStart(8), String(trivial.p99).padStart(8))
     console.log(name.padEnd(38), r.rps.toFixed(0).padStart(9), String(r.p50).padStart(8), String(r.p99).padStart(8),
-      `  ${ratio.toFixed(2)}×${goal ? ` (goal ≥ ${goal}×${ratio >= goal ? ', met' : ', not met'})` : ''}; p99/p50 ${spread.toFixed(1)} (goal ≤ ${tail}${spread <= tail ? ', met' : ', not met'})`)
+      `  ${r.kB.toFixed(0)} kB/answer; ${ratio.toFixed(2)}×${goal ? ` (goal ≥ ${goal}×${ratio >= goal ? ', met' : ', not met'})` : ''}; p99/p50 ${spread.toFixed(1)} (goal ≤ ${tail}${spread <= tail ? ', met' : ', not met'})`)
   }
   const rssKb = Number(readFileSync(`/proc/${server.pid}/status`, 'utf8').match(/VmRSS:\s+(\d+)/)[1])
   console.log(`server resident memory after the runs: ${(rssKb / 1024).toFixed(0)} MB`)

@@ -4,6 +4,7 @@ import type { BoardSortKey, PlanBoardPage, PlanBoardQuery, PlanCreateInput, Plan
 import type { PlanView } from '#shared/types/planView'
 import type { Waypoint } from '#shared/types/waypoint'
 import type { FuelInput, StoredLegs } from './planLegs'
+import type { CachedPlanView } from './planViewCache'
 
 type LegPlan = Parameters<typeof storeLegs>[1]
 
@@ -83,8 +84,8 @@ const VIEW_SQL = `select
   l.plan_version, l.engine, l.zone_signature, l.legs_json, l.totals_json, l.fuel_input_json
   from (select 1) one left join plan_legs l on l.plan_id = :id`
 
-/** GET /api/plans/:id as the JSON text it sends: legs read back as stored (see planLegs.ts), recomputed only when stale. */
-export async function getPlanViewJson(user: SessionUser, id: number): Promise<string> {
+/** A plan view built afresh as JSON text: legs read back as stored (see planLegs.ts), recomputed only when stale. */
+async function buildPlanViewJson(user: SessionUser, id: number): Promise<string> {
   // The plan row (which scopes the request to the caller's company) and the rest of the view at once:
   // for another company's plan the view's rows are read but never used.
   const [plan, { rows: [r] }] = await Promise.all([findPlan(user, id), useDb().raw(VIEW_SQL, { id })])
@@ -93,7 +94,7 @@ export async function getPlanViewJson(user: SessionUser, id: number): Promise<st
   plan.arrivalTimeZone ??= r.count > 1 ? timeZoneAt(r.last[0], r.last[1]) : null
   const legs: StoredLegs = (await storedLegsCurrent(plan, r))
     ? { legsJson: r.legs_json, totalsJson: r.totals_json, fuelInput: JSON.parse(r.fuel_input_json) as FuelInput }
-    : await storeLegs(useDb(), plan, await loadWaypoints(id))
+    : await storeLegsOnRead(plan)
   const [fuel, landCheck] = await Promise.all([
     fuelForPlan(user.companyId, plan.vesselId, legs.fuelInput.legs, legs.fuelInput.zones),
     latestLandCheck(useDb(), id, r.track_md5 ?? undefined),
@@ -101,8 +102,28 @@ export async function getPlanViewJson(user: SessionUser, id: number): Promise<st
   return `{"plan":${JSON.stringify(plan)},"waypoints":${r.waypoints},"legs":${legs.legsJson},"totals":${legs.totalsJson},"fuel":${JSON.stringify(fuel)},"events":${r.events},"landCheck":${JSON.stringify(landCheck)}}`
 }
 
+/**
+ * GET /api/plans/:id as the JSON text it sends, kept while nothing it shows changes (planViewCache.ts):
+ * one query checks that and the company scope; 404 for another company's plan.
+ */
+export function getPlanViewJson(user: SessionUser, id: number): Promise<CachedPlanView> {
+  return cachedPlanView(user, id, buildPlanViewJson)
+}
+
+/**
+ * Stale legs recomputed and stored by a read. The plan row is locked first, as a save locks it before
+ * it stores legs, so the two never wait for each other's locks in opposite orders (storing legs moves
+ * the plan's view stamp, which is on the plan row).
+ */
+function storeLegsOnRead(plan: PlanDetail): Promise<StoredLegs> {
+  return useDb().transaction(async (trx) => {
+    await trx.raw('select 1 from plans where id = ? for no key update', [plan.id])
+    return storeLegs(trx, plan, await loadWaypoints(plan.id, trx))
+  })
+}
+
 export async function getPlanView(user: SessionUser, id: number): Promise<PlanView> {
-  return JSON.parse(await getPlanViewJson(user, id)) as PlanView
+  return JSON.parse((await getPlanViewJson(user, id)).json.toString()) as PlanView
 }
 
 export async function recordEvent(db: Knex | Knex.Transaction, planId: number, user: SessionUser, kind: string, from: string | null, to: string | null, remarks: string | null = null) {

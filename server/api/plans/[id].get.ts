@@ -3,8 +3,12 @@ import type { PlanView } from '#shared/types/planView'
 
 export default defineRoleHandler(ALL_ROLES, async (event, user) => {
   const { id } = await getValidatedRouterParams(event, idParamsSchema.parse)
-  // Sent as the service wrote it (stored legs are not parsed and serialised again): the text of a
-  // PlanView, encoded once here (a string would be measured and encoded again on its way out).
+  // Sent as the service keeps it (server/utils/planViewCache.ts): the text of a PlanView, compressed
+  // once per view for a client that accepts brotli or gzip (every browser does).
+  const view = await getPlanViewJson(user, id)
+  const { body, encoding } = await encodedPlanView(view, pickEncoding(getRequestHeader(event, 'accept-encoding')))
   setResponseHeader(event, 'content-type', 'application/json')
-  return Buffer.from(await getPlanViewJson(user, id)) as unknown as PlanView
+  appendResponseHeader(event, 'vary', 'accept-encoding')
+  if (encoding) setResponseHeader(event, 'content-encoding', encoding)
+  return body as unknown as PlanView
 })
