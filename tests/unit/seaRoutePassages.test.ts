@@ -92,3 +92,19 @@ describe('declared passages', () => {
     c.round(r)
   })
 })
+
+describe('an end inside a passage', () => {
+  // Inside the Great Belt off Korsør (from memory), about 2 nm beside the fairway's leg from
+  // 55.034° N up to 55.718° N, bound for the Skaw: the route joins the fairway beside the start
+  // and sails north, never back south to the fairway point behind it.
+  const inside = { lat: 55.1, lon: 10.95 }
+  const skaw = { lat: 57.9, lon: 10.8 }
+
+  it('joins the fairway at its nearest point, both ways', () => {
+    for (const r of [seaRoute(graph, inside, skaw), seaRoute(graph, skaw, inside)]) {
+      expect(ids(r)).toContain('great-belt')
+      expect(minLat(r)).toBeGreaterThan(inside.lat - 0.02)
+      expect(landPoints(graph.land, r)).toEqual([])
+    }
+  })
+})

@@ -15,11 +15,11 @@ import { coastDistanceNm } from './coast'
 import { EndError, joinedEnd, rejoinedOnMainWater } from './ends'
 import type { RouteEnd } from './ends'
 import { aStar } from './search'
-import type { CostModel } from './search'
+import type { CostModel, Seed } from './search'
 import type { SeaGraph } from './seaGraph'
 import { smoothPath } from './smooth'
 import type { PathPoint } from './smooth'
-import { rasterLowerBoundNm } from './visibility'
+import { legClear, rasterLowerBoundNm } from './visibility'
 
 export class NoRouteError extends Error {}
 
@@ -127,16 +127,75 @@ function viaOf(pts: RouteWaypoint[]): { id: string, name: string }[] {
   return [...metAt.entries()].sort((x, y) => x[1] - y[1]).map(([pi]) => ({ id: PASSAGES[pi]!.id, name: PASSAGES[pi]!.name }))
 }
 
-/** The waypoints of a route through the graph path between two placed ends. */
-export function routeThrough(g: SeaGraph, q: RouteQuery, from: RouteEnd, to: RouteEnd, nodes: number[]): RouteWaypoint[] {
+/** How far beside a declared passage's fairway an end may lie and still join it at its nearest point, nm. */
+const FAIRWAY_FOOT_NM = 6
+
+/** Where an end beside a fairway meets it: the foot on the nearest fairway leg, and seeds to both ends of that leg through it. */
+export interface FairwayFoot { lat: number, lon: number, passage: number, seeds: Seed[] }
+
+const fairwayStart = new WeakMap<SeaGraph, Map<number, number>>()
+
+/** The nearest point of a fairway leg within FAIRWAY_FOOT_NM of the end, in sight of it, off avoided passages; null when none. */
+export function fairwayFoot(g: SeaGraph, q: RouteQuery, end: RouteEnd): FairwayFoot | null {
+  let starts = fairwayStart.get(g)
+  if (!starts) {
+    starts = new Map()
+    for (let v = 0; v < g.nodeCount; v++) if (g.nodePassage[v] && !starts.has(g.nodePassage[v]!)) starts.set(g.nodePassage[v]!, v)
+    fairwayStart.set(g, starts)
+  }
+  const k = Math.cos((end.lat * Math.PI) / 180)
+  let best: { nm: number, lat: number, lon: number, pi: number, a: number, b: number } | null = null
+  PASSAGES.forEach((p, pi) => {
+    if (!p.fairway || q.avoid.has(pi) || !starts.has(pi + 1)) return
+    const first = starts.get(pi + 1)!
+    for (let s = 0; s + 1 < p.fairway.length; s++) {
+      const [la1, lo1] = p.fairway[s]!, [la2, lo2] = p.fairway[s + 1]!
+      const ax = normaliseLongitude(lo1 - end.lon) * k, ay = la1 - end.lat
+      const bx = normaliseLongitude(lo2 - end.lon) * k, by = la2 - end.lat
+      const dx = bx - ax, dy = by - ay
+      const t = Math.max(0, Math.min(1, -(ax * dx + ay * dy) / (dx * dx + dy * dy || 1)))
+      const fx = ax + t * dx, fy = ay + t * dy
+      const nm = Math.hypot(fx, fy) * 60
+      if (t > 0 && t < 1 && nm <= FAIRWAY_FOOT_NM && (!best || nm < best.nm)) {
+        best = { nm, lat: end.lat + fy, lon: normaliseLongitude(end.lon + fx / k), pi, a: first + s, b: first + s + 1 }
+      }
+    }
+  })
+  const f = best as { nm: number, lat: number, lon: number, pi: number, a: number, b: number } | null
+  if (!f || !legClear(g.sight, end.lat, end.lon, f.lat, f.lon, 0, q.limitLat)) return null
+  const along = (v: number) => karneyNm(f, { lat: g.lat[v]!, lon: g.lon[v]! })
+  return { lat: f.lat, lon: f.lon, passage: f.pi + 1, seeds: [{ node: f.a, costNm: f.nm + along(f.a) }, { node: f.b, costNm: f.nm + along(f.b) }] }
+}
+
+function legsNm(w: RouteWaypoint[]): number {
+  let nm = 0
+  for (let i = 0; i + 1 < w.length; i++) nm += karneyNm(w[i]!, w[i + 1]!)
+  return nm
+}
+
+/** The foot to insert beside an end when the path joins the graph through it (its seed is the cheapest for the path's node). */
+function footUsed(foot: FairwayFoot | null, seeds: Seed[], node: number): FairwayFoot | null {
+  if (!foot) return null
+  const viaFoot = foot.seeds.find(s => s.node === node)
+  if (!viaFoot) return null
+  return seeds.every(s => s.node !== node || s.costNm >= viaFoot.costNm) ? foot : null
+}
+
+/** The waypoints of a route through the graph path between two placed ends (by a fairway's foot beside an end, where given). */
+export function routeThrough(g: SeaGraph, q: RouteQuery, from: RouteEnd, to: RouteEnd, nodes: number[], feet: { from?: FairwayFoot | null, to?: FairwayFoot | null } = {}): RouteWaypoint[] {
+  const footPoint = (f: FairwayFoot) => ({ lat: f.lat, lon: f.lon, fixed: true, passage: f.passage })
   const points: (PathPoint & { passage: number })[] = [
     { lat: from.lat, lon: from.lon, fixed: false, passage: 0 },
+    ...(feet.from ? [footPoint(feet.from)] : []),
     ...nodes.map(v => ({ lat: g.lat[v]!, lon: g.lon[v]!, fixed: g.nodePassage[v]! > 0, passage: g.nodePassage[v]! })),
+    ...(feet.to ? [footPoint(feet.to)] : []),
     { lat: to.lat, lon: to.lon, fixed: false, passage: 0 },
   ]
   const segmentClearNm: number[] = []
   segmentClearNm.push(Math.min(from.clearNm, g.clearNm[nodes[0]!]!))
+  if (feet.from) segmentClearNm.push(0)
   for (let i = 0; i + 1 < nodes.length; i++) segmentClearNm.push(g.edgeClearNm[edgeBetween(g, nodes[i]!, nodes[i + 1]!)] ?? 0)
+  if (feet.to) segmentClearNm.push(0)
   segmentClearNm.push(Math.min(to.clearNm, g.clearNm[nodes[nodes.length - 1]!]!))
   const kept = smoothPath(points, { sight: g.sight, clearanceNm: q.clearanceNm, limitLat: q.limitLat, segmentClearNm, crossesAvoided: q.crossesAvoided, areas: q.areas })
   const counters = new Map<number, number>()
@@ -191,6 +250,19 @@ export function seaRoute(g: SeaGraph, fromPos: LatLon, toPos: LatLon, opts: SeaR
     const moved: SeaRouteResult['moved'] = {}
     if (a.end.movedNm > 0) moved.from = a.end.movedNm
     if (b.end.movedNm > 0) moved.to = b.end.movedNm
+    // An end beside a fairway joins it at its nearest point, not at a fairway point behind it.
+    const fa = fairwayFoot(g, q, a.end), fb = fairwayFoot(g, q, b.end)
+    if (fa || fb) {
+      const viaFeet = aStar(g, [...a.seeds, ...(fa?.seeds ?? [])], [...b.seeds, ...(fb?.seeds ?? [])], b.end, q.model)
+      if (viaFeet) {
+        const feet = { from: footUsed(fa, a.seeds, viaFeet.nodes[0]!), to: footUsed(fb, b.seeds, viaFeet.nodes.at(-1)!) }
+        if (feet.from || feet.to) {
+          // The shorter of the two once smoothed: the fairway costs no clearance penalty, so its path may cost less and sail further.
+          const plain = routeThrough(g, q, a.end, b.end, path.nodes), byFoot = routeThrough(g, q, a.end, b.end, viaFeet.nodes, feet)
+          return describeRoute(g, q, legsNm(byFoot) < legsNm(plain) ? byFoot : plain, moved)
+        }
+      }
+    }
     return describeRoute(g, q, routeThrough(g, q, a.end, b.end, path.nodes), moved)
   }
   finally { q.release() }
